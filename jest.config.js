@@ -1,0 +1,45 @@
+// Two projects: React components under jest-expo, and the Node side (shared, server, documents)
+// compiled by SWC. ESM-only packages are compiled too, since jest on Node 20 cannot require() them.
+const esmOnly = [
+  'better-auth',
+  '@better-auth',
+  'better-call',
+  'jose',
+  'nanostores',
+  '@noble',
+  '@better-fetch',
+  'rou3',
+  'set-cookie-parser',
+  'defu',
+  'dinero.js',
+  '@dinero.js',
+];
+
+const alias = { '^@/(.*)$': '<rootDir>/$1' };
+
+module.exports = {
+  projects: [
+    {
+      displayName: 'components',
+      preset: 'jest-expo',
+      testMatch: ['<rootDir>/tests/components/**/*.test.tsx'],
+      moduleNameMapper: alias,
+    },
+    {
+      displayName: 'node',
+      testEnvironment: 'node',
+      testMatch: ['<rootDir>/tests/{shared,server,documents}/**/*.test.ts'],
+      moduleNameMapper: alias,
+      transform: {
+        '^.+\\.(t|j|mj|cj)sx?$': [
+          '@swc/jest',
+          {
+            jsc: { parser: { syntax: 'typescript', tsx: true }, target: 'es2022' },
+            module: { type: 'commonjs' },
+          },
+        ],
+      },
+      transformIgnorePatterns: [`/node_modules/(?!(${esmOnly.join('|')})/)`],
+    },
+  ],
+};
