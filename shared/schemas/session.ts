@@ -4,7 +4,7 @@ import { membershipSchema } from './membership';
 
 export const signInSchema = z.strictObject({
   email: z.email({ error: 'Enter an e-mail address such as name@example.com.' }),
-  password: z.string().min(1, { error: 'Enter your password.' }),
+  password: z.string({ error: 'Enter your password.' }).min(1, { error: 'Enter your password.' }),
 });
 export type SignIn = z.infer<typeof signInSchema>;
 

@@ -1,0 +1,34 @@
+import fs from 'node:fs';
+import path from 'node:path';
+
+/** Settings from the environment, with the defaults that make `npm start` work on a fresh clone. */
+export function readConfig(env: NodeJS.ProcessEnv = process.env) {
+  const dbFile = env.SAGGAR_DB ?? 'data/saggar.db';
+  const dataDir = path.dirname(path.resolve(dbFile === ':memory:' ? 'data/x' : dbFile));
+  return {
+    port: Number(env.PORT ?? 8080),
+    host: env.HOST ?? '0.0.0.0',
+    dbFile,
+    dataDir,
+    webRoot: env.SAGGAR_WEB_ROOT ?? 'dist',
+    /** Set by `npm run dev`: the Expo dev server that non-API requests are passed to. */
+    webDevUrl: env.SAGGAR_WEB_DEV_URL ?? null,
+    trustedOrigins: (env.SAGGAR_TRUSTED_ORIGINS ?? '').split(',').filter(Boolean),
+    authSecret: env.SAGGAR_AUTH_SECRET ?? localSecret(dataDir),
+    logLevel: env.LOG_LEVEL ?? 'info',
+  };
+}
+export type Config = ReturnType<typeof readConfig>;
+
+/**
+ * Without SAGGAR_AUTH_SECRET, a random secret is made once and kept beside the database, so a
+ * restart does not sign everybody out. Production sets the variable.
+ */
+function localSecret(dataDir: string): string {
+  const file = path.join(dataDir, '.auth-secret');
+  if (fs.existsSync(file)) return fs.readFileSync(file, 'utf8').trim();
+  fs.mkdirSync(dataDir, { recursive: true });
+  const secret = crypto.randomUUID() + crypto.randomUUID();
+  fs.writeFileSync(file, secret, { mode: 0o600 });
+  return secret;
+}

@@ -1,0 +1,35 @@
+import { type RequestHandler } from 'express';
+import { type Logger } from 'pino';
+
+import { type AuthOptions, createAuth } from './auth/auth';
+import { type Db } from './db/database';
+
+/** Everything the app needs from outside, so tests can build it over an in-memory database. */
+export type AppContext = {
+  db: Db;
+  auth: ReturnType<typeof createAuth>;
+  logger: Logger;
+  /** Serves everything outside /api: the exported web app, or Expo's dev server; null for none. */
+  web: RequestHandler | null;
+  trustedOrigins: readonly string[];
+  /** Failed sign-ins allowed per client address in the window. */
+  signInLimit: { max: number; windowMs: number };
+};
+
+export type ContextOptions = Omit<AppContext, 'auth' | 'signInLimit'> &
+  Pick<AuthOptions, 'secret'> &
+  Partial<Pick<AppContext, 'signInLimit'>>;
+
+export function createContext(options: ContextOptions): AppContext {
+  const { secret, ...rest } = options;
+  return {
+    signInLimit: { max: 10, windowMs: 15 * 60 * 1000 },
+    ...rest,
+    auth: createAuth({
+      db: options.db,
+      logger: options.logger,
+      secret,
+      trustedOrigins: options.trustedOrigins,
+    }),
+  };
+}

@@ -1,0 +1,14 @@
+import { type Kysely, type MigrationProvider, Migrator } from 'kysely';
+
+import { migrations } from './migrations';
+
+const provider: MigrationProvider = { getMigrations: async () => migrations };
+
+/** Brings the database to the latest migration, or throws with the one that failed. */
+export async function migrateToLatest(db: Kysely<any>): Promise<void> {
+  const { error, results } = await new Migrator({ db, provider }).migrateToLatest();
+  const failed = results?.find((r) => r.status === 'Error');
+  if (error || failed) {
+    throw new Error(`Migration ${failed?.migrationName ?? ''} failed`, { cause: error });
+  }
+}

@@ -1,0 +1,28 @@
+import { readConfig } from '../config';
+import { openDatabase } from '../db/database';
+import { migrateToLatest } from '../db/migrate';
+import { clearAllData, seedDemoIfEmpty } from './seed';
+
+/** `npm run seed` seeds an empty database; `npm run seed -- --reset` empties it first. */
+async function main() {
+  const reset = process.argv.includes('--reset');
+  const { dbFile } = readConfig();
+  const db = openDatabase(dbFile);
+  try {
+    await migrateToLatest(db);
+    if (reset) await clearAllData(db);
+    const seeded = await seedDemoIfEmpty(db);
+    console.log(
+      seeded
+        ? `Demo data seeded into ${dbFile}.`
+        : `${dbFile} already holds data; nothing seeded. Use --reset to replace it with the demo.`,
+    );
+  } finally {
+    await db.destroy();
+  }
+}
+
+main().catch((err: unknown) => {
+  console.error(err);
+  process.exit(1);
+});

@@ -1,0 +1,188 @@
+import { sql } from 'kysely';
+
+import { insuranceValue } from '@/shared/money';
+import { type Terms } from '@/shared/schemas/terms';
+
+import { createUserWithPassword } from '../auth/passwords';
+import { type Db } from '../db/database';
+import { type Database } from '../db/schema';
+import { demoConsignments, demoSignIns, demoStudio, demoVenues, demoWorks } from './demo-studio';
+
+/** Children before parents, so deleting in this order never trips a foreign key. */
+const tablesInDeleteOrder: (keyof Database)[] = [
+  'audit_log',
+  'outbox',
+  'payments',
+  'statement_lines',
+  'statements',
+  'condition_findings',
+  'condition_reports',
+  'consignment_lines',
+  'consignments',
+  'work_photos',
+  'works',
+  'files',
+  'invitations',
+  'sessions',
+  'memberships',
+  'venues',
+  'studios',
+  'verifications',
+  'accounts',
+  'users',
+];
+
+export async function isEmpty(db: Db): Promise<boolean> {
+  const row = await sql<{ n: number }>`select
+    (select count(*) from studios) + (select count(*) from users) as n`.execute(db);
+  return Number(row.rows[0]?.n ?? 0) === 0;
+}
+
+/** Deletes every row of every table; used by `npm run seed -- --reset` only. */
+export async function clearAllData(db: Db): Promise<void> {
+  await db.transaction().execute(async (trx) => {
+    for (const table of tablesInDeleteOrder) await trx.deleteFrom(table).execute();
+  });
+}
+
+/** Seeds the demo scenario, but only into an empty database. Returns whether it did. */
+export async function seedDemoIfEmpty(db: Db): Promise<boolean> {
+  if (!(await isEmpty(db))) return false;
+  await seedDemo(db);
+  return true;
+}
+
+async function seedDemo(db: Db): Promise<void> {
+  const [makerPerson, assistantPerson, galleryPerson] = demoSignIns.people;
+  const password = demoSignIns.password;
+  const maker = await createUserWithPassword(db, { ...makerPerson, password });
+  const assistant = await createUserWithPassword(db, { ...assistantPerson, password });
+  const gallery = await createUserWithPassword(db, { ...galleryPerson, password });
+
+  await db.transaction().execute(async (trx) => {
+    const { id: studioId } = await trx
+      .insertInto('studios')
+      .values({
+        name: demoStudio.name,
+        country: demoStudio.country,
+        currency: demoStudio.currency,
+        stock_number_pattern: demoStudio.stockNumberPattern,
+        price_step: demoStudio.priceStep,
+        default_terms: JSON.stringify(demoVenues[1].terms),
+      })
+      .returning('id')
+      .executeTakeFirstOrThrow();
+
+    const venueIds = new Map<string, number>();
+    for (const v of demoVenues) {
+      const { id } = await trx
+        .insertInto('venues')
+        .values({
+          studio_id: studioId,
+          name: v.name,
+          kind: v.kind,
+          town: v.town,
+          postcode: v.postcode,
+          country: 'GB',
+          contact_name: v.contactName,
+          email: v.email,
+          vat_number: v.vatNumber,
+          default_terms: JSON.stringify(v.terms),
+        })
+        .returning('id')
+        .executeTakeFirstOrThrow();
+      venueIds.set(v.key, id);
+    }
+
+    await trx
+      .insertInto('memberships')
+      .values([
+        { user_id: maker, studio_id: studioId, role: 'owner', venue_id: null },
+        { user_id: assistant, studio_id: studioId, role: 'assistant', venue_id: null },
+        {
+          user_id: gallery,
+          studio_id: studioId,
+          role: 'gallery',
+          venue_id: venueIds.get('lanthorn')!,
+        },
+      ])
+      .execute();
+
+    const workIds: number[] = [];
+    for (const [i, w] of demoWorks.entries()) {
+      const { id } = await trx
+        .insertInto('works')
+        .values({
+          studio_id: studioId,
+          stock_number: `${i < 8 ? 2025 : 2026}-${String(i + 1).padStart(3, '0')}`,
+          title: w.title,
+          year: i < 8 ? 2025 : 2026,
+          series: w.series,
+          category: w.category,
+          clay_body: w.clayBody,
+          glaze: w.glaze,
+          firing_temp_c: w.firingTempC,
+          atmosphere: w.atmosphere,
+          kiln: w.kiln,
+          height_mm: w.size[0],
+          width_mm: w.size[1],
+          depth_mm: w.size[2],
+          weight_g: w.weightG,
+          retail_price: w.pricePence,
+          currency: 'GBP',
+          cost_price: w.costPence ?? null,
+          food_use: w.foodUse,
+          care_notes: w.careNotes ?? null,
+        })
+        .returning('id')
+        .executeTakeFirstOrThrow();
+      workIds.push(id);
+    }
+
+    for (const c of demoConsignments) {
+      const venue = demoVenues.find((v) => v.key === c.venue)!;
+      const terms: Terms = { ...venue.terms };
+      const { id: consignmentId } = await trx
+        .insertInto('consignments')
+        .values({
+          studio_id: studioId,
+          venue_id: venueIds.get(c.venue)!,
+          reference: c.reference,
+          title: c.title,
+          state: c.state,
+          dispatch_date: c.dispatchDate,
+          opening_date: c.openingDate,
+          closing_date: c.closingDate,
+          return_due_date: c.returnDueDate,
+          terms: JSON.stringify(terms),
+          agreed_at: `${c.dispatchDate}T09:00:00.000Z`,
+        })
+        .returning('id')
+        .executeTakeFirstOrThrow();
+
+      for (const line of c.lines) {
+        const work = demoWorks[line.work]!;
+        const listPrice = { amount: work.pricePence, currency: 'GBP' };
+        const sold = 'sold' in line ? line.sold : null;
+        const recorder = c.venue === 'lanthorn' ? gallery : assistant;
+        await trx
+          .insertInto('consignment_lines')
+          .values({
+            studio_id: studioId,
+            consignment_id: consignmentId,
+            work_id: workIds[line.work]!,
+            currency: 'GBP',
+            list_price: work.pricePence,
+            insurance_value: insuranceValue(terms, listPrice).amount,
+            state: sold ? 'sold' : 'consigned',
+            sold_on: sold?.on ?? null,
+            sale_price: sold?.price ?? null,
+            discount: sold ? work.pricePence - sold.price : null,
+            sale_recorded_by: sold ? recorder : null,
+            sale_recorded_at: sold ? `${sold.on}T16:30:00.000Z` : null,
+          })
+          .execute();
+      }
+    }
+  });
+}
