@@ -1,0 +1,175 @@
+import request from 'supertest';
+
+import { protectedRoutes } from './helpers/routes';
+import {
+  addConsignment,
+  addPerson,
+  addStudio,
+  addVenue,
+  createTestApp,
+  signIn,
+} from './helpers/test-app';
+
+/** Two studios; a gallery member of studio A's venue, and owners of each. */
+async function twoStudios() {
+  const ctx = await createTestApp();
+  const { db } = ctx;
+  const studioA = await addStudio(db, 'Studio A');
+  const studioB = await addStudio(db, 'Studio B');
+  const venueA = await addVenue(db, studioA, 'Gallery of A');
+  const venueB = await addVenue(db, studioB, 'Gallery of B');
+  await addPerson(db, 'owner-a@example.test', [{ studioId: studioA, role: 'owner' }]);
+  await addPerson(db, 'assistant-a@example.test', [{ studioId: studioA, role: 'assistant' }]);
+  await addPerson(db, 'owner-b@example.test', [{ studioId: studioB, role: 'owner' }]);
+  await addPerson(db, 'gallery-a@example.test', [
+    { studioId: studioA, role: 'gallery', venueId: venueA },
+  ]);
+  const consignmentA = await addConsignment(db, studioA, venueA, 'A-1');
+  const draftA = await addConsignment(db, studioA, venueA, 'A-DRAFT', 'draft');
+  const consignmentB = await addConsignment(db, studioB, venueB, 'B-1');
+  return { ...ctx, studioA, studioB, venueA, venueB, consignmentA, draftA, consignmentB };
+}
+
+const call = (app: Parameters<typeof request>[0], route: (typeof protectedRoutes)[number]) =>
+  request(app)
+    [route.method](route.path)
+    .send(route.method === 'get' ? undefined : {});
+
+describe('every protected /api route', () => {
+  it.each(protectedRoutes)('$method $path answers 401 without a session', async (route) => {
+    const { app } = await createTestApp();
+    const res = await call(app, route);
+    expect(res.status).toBe(401);
+    expect(res.body).toEqual({
+      error: { code: 'unauthenticated', message: 'Sign in to continue.' },
+    });
+  });
+
+  it.each(protectedRoutes.filter((r) => !r.roles.includes('gallery')))(
+    '$method $path answers 403 to the gallery role',
+    async (route) => {
+      const { app } = await twoStudios();
+      const cookie = await signIn(app, 'gallery-a@example.test');
+      const res = await call(app, route).set('Cookie', cookie);
+      expect(res.status).toBe(403);
+      expect(res.body).toEqual({
+        error: { code: 'forbidden', message: 'Your role in this studio does not allow this.' },
+      });
+    },
+  );
+
+  it.each(protectedRoutes.filter((r) => !r.roles.includes('owner')))(
+    '$method $path answers 403 to the studio roles',
+    async (route) => {
+      const { app } = await twoStudios();
+      for (const email of ['owner-a@example.test', 'assistant-a@example.test']) {
+        const res = await call(app, route).set('Cookie', await signIn(app, email));
+        expect(res.status).toBe(403);
+      }
+    },
+  );
+});
+
+describe('GET /api/me', () => {
+  it('returns the user, the memberships and the active one', async () => {
+    const { app, studioA, venueA } = await twoStudios();
+    const res = await request(app)
+      .get('/api/me')
+      .set('Cookie', await signIn(app, 'gallery-a@example.test'));
+    expect(res.status).toBe(200);
+    expect(res.body).toEqual({
+      user: { id: expect.any(String), name: 'gallery-a', email: 'gallery-a@example.test' },
+      memberships: [
+        {
+          id: expect.any(Number),
+          studioId: studioA,
+          studioName: 'Studio A',
+          role: 'gallery',
+          venueId: venueA,
+          venueName: 'Gallery of A',
+        },
+      ],
+      activeMembershipId: res.body.memberships[0].id,
+    });
+  });
+});
+
+describe('GET /api/venue/consignments', () => {
+  it("shows the gallery member only its venue's agreed consignments from that studio", async () => {
+    const { app, consignmentA } = await twoStudios();
+    const res = await request(app)
+      .get('/api/venue/consignments')
+      .set('Cookie', await signIn(app, 'gallery-a@example.test'));
+    expect(res.status).toBe(200);
+    expect(res.body.studio.name).toBe('Studio A');
+    expect(res.body.venue.name).toBe('Gallery of A');
+    expect(res.body.consignments.map((c: { id: number }) => c.id)).toEqual([consignmentA]);
+  });
+});
+
+describe('a gallery member of one studio', () => {
+  it('cannot switch into a membership of another studio', async () => {
+    const { app, db } = await twoStudios();
+    const other = await db
+      .selectFrom('memberships')
+      .innerJoin('users', 'users.id', 'memberships.user_id')
+      .select('memberships.id')
+      .where('users.email', '=', 'owner-b@example.test')
+      .executeTakeFirstOrThrow();
+    const res = await request(app)
+      .put('/api/me/active-membership')
+      .set('Cookie', await signIn(app, 'gallery-a@example.test'))
+      .send({ membershipId: other.id });
+    expect(res.status).toBe(404);
+    expect(res.body).toEqual({
+      error: { code: 'not_found', message: 'That membership was not found.' },
+    });
+  });
+
+  it('reads nothing of another studio anywhere it may go', async () => {
+    const { app } = await twoStudios();
+    const cookie = await signIn(app, 'gallery-a@example.test');
+    for (const route of protectedRoutes.filter((r) => r.method === 'get')) {
+      const res = await request(app).get(route.path).set('Cookie', cookie);
+      expect(JSON.stringify(res.body)).not.toMatch(/Studio B|Gallery of B|B-1/);
+    }
+  });
+});
+
+describe('PUT /api/me/active-membership', () => {
+  it('leaves a person with several memberships to choose, then scopes to the choice', async () => {
+    const { app, db, studioA, studioB, venueB } = await twoStudios();
+    await addPerson(db, 'both@example.test', [
+      { studioId: studioA, role: 'assistant' },
+      { studioId: studioB, role: 'gallery', venueId: venueB },
+    ]);
+    const cookie = await signIn(app, 'both@example.test');
+
+    const before = await request(app).get('/api/me').set('Cookie', cookie);
+    expect(before.body.activeMembershipId).toBeNull();
+    const refused = await request(app).get('/api/overview').set('Cookie', cookie);
+    expect(refused.status).toBe(403);
+    expect(refused.body.error.message).toBe('Choose which studio to work in first.');
+
+    const [inA, inB] = before.body.memberships as { id: number; studioId: number }[];
+    const chosen = await request(app)
+      .put('/api/me/active-membership')
+      .set('Cookie', cookie)
+      .send({ membershipId: inA!.studioId === studioA ? inA!.id : inB!.id });
+    expect(chosen.status).toBe(200);
+    const overview = await request(app).get('/api/overview').set('Cookie', cookie);
+    expect(overview.status).toBe(200);
+    expect(overview.body.studio.name).toBe('Studio A');
+    const venueSide = await request(app).get('/api/venue/consignments').set('Cookie', cookie);
+    expect(venueSide.status).toBe(403);
+
+    await request(app)
+      .put('/api/me/active-membership')
+      .set('Cookie', cookie)
+      .send({ membershipId: inA!.studioId === studioB ? inA!.id : inB!.id });
+    const gallerySide = await request(app).get('/api/venue/consignments').set('Cookie', cookie);
+    expect(gallerySide.status).toBe(200);
+    expect(gallerySide.body.studio.name).toBe('Studio B');
+    expect((await request(app).get('/api/overview').set('Cookie', cookie)).status).toBe(403);
+  });
+});

@@ -1,0 +1,114 @@
+import pino from 'pino';
+import request from 'supertest';
+
+type App = Parameters<typeof request>[0];
+
+import { createApp } from '@/server/app';
+import { createUserWithPassword } from '@/server/auth/passwords';
+import { createContext } from '@/server/context';
+import { openDatabase } from '@/server/db/database';
+import { migrateToLatest } from '@/server/db/migrate';
+import { addMembership } from '@/server/memberships/memberships.repository';
+import { type Role } from '@/shared/schemas/membership';
+
+export const password = 'correct horse battery staple';
+
+/** The real app over a fresh in-memory database migrated to latest. */
+export async function createTestApp(
+  options: { signInLimit?: { max: number; windowMs: number } } = {},
+) {
+  const db = openDatabase(':memory:');
+  await migrateToLatest(db);
+  const context = createContext({
+    db,
+    logger: pino({ level: 'silent' }),
+    secret: 'test-secret-that-is-long-enough-for-better-auth',
+    web: null,
+    trustedOrigins: [],
+    ...options,
+  });
+  return { app: createApp(context), db, context };
+}
+
+type TestDb = Awaited<ReturnType<typeof createTestApp>>['db'];
+
+const terms = JSON.stringify({
+  currency: 'GBP',
+  commissionRateBp: 4000,
+  vatRateBp: 2000,
+  venueRole: 'agent',
+  commissionVat: 'none',
+  makerVatRegistered: false,
+  discountRule: 'shared',
+  insuranceBasis: 'maker-net',
+  insuredBy: 'venue',
+  paymentTerms: { days: 30, from: 'month-end' },
+});
+
+export async function addStudio(db: TestDb, name: string): Promise<number> {
+  const row = await db
+    .insertInto('studios')
+    .values({ name })
+    .returning('id')
+    .executeTakeFirstOrThrow();
+  return row.id;
+}
+
+export async function addVenue(db: TestDb, studioId: number, name: string): Promise<number> {
+  const row = await db
+    .insertInto('venues')
+    .values({ studio_id: studioId, name, kind: 'gallery', default_terms: terms })
+    .returning('id')
+    .executeTakeFirstOrThrow();
+  return row.id;
+}
+
+export async function addConsignment(
+  db: TestDb,
+  studioId: number,
+  venueId: number,
+  reference: string,
+  state: 'draft' | 'on-show' = 'on-show',
+): Promise<number> {
+  const row = await db
+    .insertInto('consignments')
+    .values({
+      studio_id: studioId,
+      venue_id: venueId,
+      reference,
+      title: `Show ${reference}`,
+      state,
+      terms: state === 'draft' ? null : terms,
+      dispatch_date: '2026-10-01',
+    })
+    .returning('id')
+    .executeTakeFirstOrThrow();
+  return row.id;
+}
+
+/** A person with one membership per entry; returns the user id. */
+export async function addPerson(
+  db: TestDb,
+  email: string,
+  memberships: { studioId: number; role: Role; venueId?: number }[],
+): Promise<string> {
+  const userId = await createUserWithPassword(db, { name: email.split('@')[0]!, email, password });
+  for (const m of memberships) {
+    await addMembership(db, {
+      userId,
+      studioId: m.studioId,
+      role: m.role,
+      venueId: m.venueId ?? null,
+    });
+  }
+  return userId;
+}
+
+/** Signs in through the real endpoint and returns the session cookie to send back. */
+export async function signIn(app: App, email: string): Promise<string> {
+  const res = await request(app).post('/api/auth/sign-in/email').send({ email, password });
+  if (res.status !== 200)
+    throw new Error(`sign-in failed: ${res.status} ${JSON.stringify(res.body)}`);
+  const cookies = ([] as string[]).concat(res.headers['set-cookie'] ?? []);
+  return cookies.map((c) => c.split(';')[0]).join('; ');
+}

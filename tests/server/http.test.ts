@@ -1,0 +1,142 @@
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+
+import pino from 'pino';
+import request from 'supertest';
+
+import { createApp } from '@/server/app';
+import { createContext } from '@/server/context';
+import { openDatabase } from '@/server/db/database';
+import { migrateToLatest } from '@/server/db/migrate';
+import { webApp } from '@/server/http/web-app';
+
+import { addPerson, addStudio, createTestApp, signIn } from './helpers/test-app';
+
+describe('GET /api/health', () => {
+  it('answers ok without a session', async () => {
+    const { app } = await createTestApp();
+    const res = await request(app).get('/api/health');
+    expect(res.status).toBe(200);
+    expect(res.body).toEqual({ status: 'ok' });
+  });
+
+  it("sends helmet's security headers", async () => {
+    const { app } = await createTestApp();
+    const res = await request(app).get('/api/health');
+    expect(res.headers['x-content-type-options']).toBe('nosniff');
+    expect(res.headers['content-security-policy']).toContain("default-src 'self'");
+    expect(res.headers['x-powered-by']).toBeUndefined();
+  });
+});
+
+describe('unknown /api paths', () => {
+  it('answer 404 in the error shape, signed in or not', async () => {
+    const { app, db } = await createTestApp();
+    const studioId = await addStudio(db, 'Studio');
+    await addPerson(db, 'owner@example.test', [{ studioId, role: 'owner' }]);
+    const cookie = await signIn(app, 'owner@example.test');
+    for (const res of [
+      await request(app).get('/api/nothing-here'),
+      await request(app).get('/api/nothing-here').set('Cookie', cookie),
+      await request(app).get('/api/auth/list-sessions').set('Cookie', cookie),
+    ]) {
+      expect(res.status).toBe(404);
+      expect(res.body).toEqual({
+        error: { code: 'not_found', message: expect.stringContaining('There is no API at') },
+      });
+    }
+  });
+});
+
+describe('request bodies', () => {
+  async function owner() {
+    const { app, db } = await createTestApp();
+    const studioId = await addStudio(db, 'Studio');
+    await addPerson(db, 'owner@example.test', [{ studioId, role: 'owner' }]);
+    return { app, cookie: await signIn(app, 'owner@example.test') };
+  }
+
+  it('answers 400 for malformed JSON, without a stack trace', async () => {
+    const { app, cookie } = await owner();
+    const res = await request(app)
+      .put('/api/me/active-membership')
+      .set('Cookie', cookie)
+      .set('Content-Type', 'application/json')
+      .send('{"membershipId": ');
+    expect(res.status).toBe(400);
+    expect(res.body).toEqual({
+      error: { code: 'invalid_request', message: 'The request body is not valid JSON.' },
+    });
+    expect(res.text).not.toMatch(/at .*\.ts:\d+/);
+  });
+
+  it('answers 400 with field issues for a body that fails its schema', async () => {
+    const { app, cookie } = await owner();
+    const res = await request(app)
+      .put('/api/me/active-membership')
+      .set('Cookie', cookie)
+      .send({ membershipId: 'one', extra: true });
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe('invalid_request');
+    expect(res.body.error.message).toBe('Some fields need attention.');
+    expect(res.body.error.issues).toEqual(
+      expect.arrayContaining([
+        { path: ['membershipId'], message: expect.any(String) },
+        { path: [], message: expect.stringContaining('extra') },
+      ]),
+    );
+  });
+
+  it('answers 413 for a body over the limit', async () => {
+    const { app, cookie } = await owner();
+    const res = await request(app)
+      .put('/api/me/active-membership')
+      .set('Cookie', cookie)
+      .send({ membershipId: 1, padding: 'x'.repeat(200_000) });
+    expect(res.status).toBe(413);
+    expect(res.body).toEqual({
+      error: { code: 'payload_too_large', message: 'The request body is too large.' },
+    });
+  });
+
+  it('answers 500 with a generic message when something unexpected fails', async () => {
+    const { app, db } = await createTestApp();
+    const studioId = await addStudio(db, 'Studio');
+    await addPerson(db, 'owner@example.test', [{ studioId, role: 'owner' }]);
+    const cookie = await signIn(app, 'owner@example.test');
+    await db.schema.dropTable('venues').execute();
+    const res = await request(app).get('/api/overview').set('Cookie', cookie);
+    expect(res.status).toBe(500);
+    expect(res.body).toEqual({
+      error: { code: 'internal', message: 'Something went wrong on our side. Try again.' },
+    });
+  });
+});
+
+describe('the web app', () => {
+  it('serves index.html for deep links and assets as files, but not for /api', async () => {
+    const root = fs.mkdtempSync(path.join(os.tmpdir(), 'saggar-web-'));
+    fs.writeFileSync(path.join(root, 'index.html'), '<!doctype html><title>Saggar</title>');
+    fs.writeFileSync(path.join(root, 'app.js'), 'console.log(1)');
+    const db = openDatabase(':memory:');
+    await migrateToLatest(db);
+    const app = createApp(
+      createContext({
+        db,
+        logger: pino({ level: 'silent' }),
+        secret: 'test-secret-that-is-long-enough-for-better-auth',
+        web: webApp(root),
+        trustedOrigins: [],
+      }),
+    );
+    const deep = await request(app).get('/works/12');
+    expect(deep.status).toBe(200);
+    expect(deep.text).toContain('<title>Saggar</title>');
+    const asset = await request(app).get('/app.js');
+    expect(asset.text).toBe('console.log(1)');
+    const api = await request(app).get('/api/works/12');
+    expect(api.status).toBe(404);
+    expect(api.body.error.code).toBe('not_found');
+  });
+});
