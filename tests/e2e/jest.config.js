@@ -1,0 +1,15 @@
+// Browser tests: the real server on a free port with a fresh database, driven by Debian's Chromium.
+module.exports = {
+  rootDir: '../..',
+  displayName: 'e2e',
+  testEnvironment: 'node',
+  testMatch: ['<rootDir>/tests/e2e/**/*.test.ts'],
+  moduleNameMapper: { '^@/(.*)$': '<rootDir>/$1' },
+  transform: {
+    '^.+\\.(t|j)sx?$': [
+      '@swc/jest',
+      { jsc: { parser: { syntax: 'typescript' }, target: 'es2022' }, module: { type: 'commonjs' } },
+    ],
+  },
+  testTimeout: 60_000,
+};
