@@ -22,7 +22,12 @@ export function createApp(context: AppContext): Express {
       },
     }),
   );
-  app.use(pinoHttp({ logger: context.logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
+  app.use(
+    pinoHttp({
+      logger: context.logger,
+      autoLogging: { ignore: (req) => req.url === '/api/health' },
+    }),
+  );
 
   mountApi(app, context);
   if (context.web) app.use(context.web);

@@ -1,10 +1,9 @@
-import { type Auth, type BetterAuthOptions, betterAuth } from 'better-auth';
+import { type Auth, betterAuth,type BetterAuthOptions } from 'better-auth';
 import { APIError, createAuthMiddleware } from 'better-auth/api';
+import { type Logger } from 'pino';
 
 import { type ApiErrorBody, type ApiErrorCode } from '@/shared/schemas/api-error';
 import { signInSchema } from '@/shared/schemas/session';
-
-import { type Logger } from 'pino';
 
 import { type Db } from '../db/database';
 import { toHttpError } from '../http/error-handler';
@@ -46,7 +45,12 @@ function normalised(error: APIError): APIError {
 }
 
 /** Identity: e-mail and password sign-in and sessions, stored in our SQLite tables. */
-export function createAuth({ db, logger, secret, trustedOrigins }: AuthOptions): Auth<BetterAuthOptions> {
+export function createAuth({
+  db,
+  logger,
+  secret,
+  trustedOrigins,
+}: AuthOptions): Auth<BetterAuthOptions> {
   const timestamps = { createdAt: 'created_at', updatedAt: 'updated_at' };
   return betterAuth({
     secret,

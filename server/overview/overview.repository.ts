@@ -24,7 +24,9 @@ export async function getOverview(db: Db, scope: Scope): Promise<Overview> {
     .select((eb) => [workStatus(eb).as('status'), eb.fn.countAll<number>().as('n')])
     .groupBy('status')
     .execute();
-  const byStatus = Object.fromEntries(workStatuses.map((s) => [s, 0])) as Overview['works']['byStatus'];
+  const byStatus = Object.fromEntries(
+    workStatuses.map((s) => [s, 0]),
+  ) as Overview['works']['byStatus'];
   for (const row of statusRows) byStatus[row.status] = Number(row.n);
 
   const venues = await scoped

@@ -22,7 +22,12 @@ export function venueHomeRouter({ db }: AppContext) {
       const venue = await scoped
         .venues(db, scope)
         .innerJoin('studios', 'studios.id', 'venues.studio_id')
-        .select(['venues.id', 'venues.name', 'studios.id as studio_id', 'studios.name as studio_name'])
+        .select([
+          'venues.id',
+          'venues.name',
+          'studios.id as studio_id',
+          'studios.name as studio_name',
+        ])
         .executeTakeFirst();
       if (!venue) throw notFound('Your venue');
       const body: VenueHome = {

@@ -27,7 +27,7 @@ afterAll(async () => {
 
 const [maker, , gallery] = demoSignIns.people;
 
-async function signIn(page: Page, email: string, password = demoSignIns.password) {
+async function signIn(page: Page, email: string, password: string = demoSignIns.password) {
   await page.goto(`${server.url}/sign-in`);
   await page.getByTestId('sign-in-screen').waitFor();
   await page.getByTestId('sign-in-email').fill(email);

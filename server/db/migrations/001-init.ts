@@ -266,9 +266,7 @@ export async function up(db: Kysely<any>): Promise<void> {
       c
         .notNull()
         .defaultTo('consigned')
-        .check(
-          oneOf('state', ['consigned', 'sold', 'returned', 'damaged', 'lost', 'withdrawn']),
-        ),
+        .check(oneOf('state', ['consigned', 'sold', 'returned', 'damaged', 'lost', 'withdrawn'])),
     )
     .addColumn('sold_on', 'text')
     .addColumn('sale_price', 'integer', (c) => c.check(sql`sale_price >= 0`))
@@ -423,7 +421,10 @@ export async function up(db: Kysely<any>): Promise<void> {
     .addColumn('html_body', 'text')
     .addColumn('attachments', 'text', (c) => c.notNull().defaultTo('[]'))
     .addColumn('state', 'text', (c) =>
-      c.notNull().defaultTo('queued').check(oneOf('state', ['queued', 'sent', 'failed'])),
+      c
+        .notNull()
+        .defaultTo('queued')
+        .check(oneOf('state', ['queued', 'sent', 'failed'])),
     )
     .addColumn('attempts', 'integer', (c) => c.notNull().defaultTo(0))
     .addColumn('last_error', 'text')

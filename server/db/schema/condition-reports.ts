@@ -1,6 +1,10 @@
 import { type Generated, type Insertable, type Selectable } from 'kysely';
 
-import { type ConditionGrade, type ConditionStage, type FindingKind } from '@/shared/schemas/condition';
+import {
+  type ConditionGrade,
+  type ConditionStage,
+  type FindingKind,
+} from '@/shared/schemas/condition';
 
 /** The overall grade is not stored: it is the grade of the most serious finding. */
 export interface ConditionReportsTable {

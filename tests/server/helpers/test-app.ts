@@ -1,8 +1,6 @@
 import pino from 'pino';
 import request from 'supertest';
 
-type App = Parameters<typeof request>[0];
-
 import { createApp } from '@/server/app';
 import { createUserWithPassword } from '@/server/auth/passwords';
 import { createContext } from '@/server/context';
@@ -10,6 +8,8 @@ import { openDatabase } from '@/server/db/database';
 import { migrateToLatest } from '@/server/db/migrate';
 import { addMembership } from '@/server/memberships/memberships.repository';
 import { type Role } from '@/shared/schemas/membership';
+
+type App = Parameters<typeof request>[0];
 
 export const password = 'correct horse battery staple';
 
