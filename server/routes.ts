@@ -9,6 +9,7 @@ import { sameOrigin } from './http/same-origin';
 import { signInLimit } from './http/sign-in-limit';
 import { meRouter } from './me/me.router';
 import { overviewRouter } from './overview/overview.router';
+import { quotesRouter } from './quotes/quotes.router';
 import { venueHomeRouter } from './venue-home/venue-home.router';
 
 /** Every API route, one line each. Order matters only where a comment says so. */
@@ -27,6 +28,7 @@ export function mountApi(app: Express, context: AppContext): void {
   app.use('/api/me', meRouter(context));
   app.use('/api/overview', overviewRouter(context));
   app.use('/api/venue', venueHomeRouter(context));
+  app.use('/api/quotes', quotesRouter(context));
 
   app.use('/api', apiNotFound);
 }

@@ -1,4 +1,4 @@
-import { type Auth, betterAuth,type BetterAuthOptions } from 'better-auth';
+import { type Auth, betterAuth, type BetterAuthOptions } from 'better-auth';
 import { APIError, createAuthMiddleware } from 'better-auth/api';
 import { type Logger } from 'pino';
 

@@ -2,6 +2,7 @@ import { type ErrorRequestHandler, type RequestHandler } from 'express';
 import { type Logger } from 'pino';
 import { ZodError } from 'zod';
 
+import { MoneyRuleError } from '@/shared/money';
 import { type ApiErrorBody } from '@/shared/schemas/api-error';
 
 import { HttpError } from './http-error';
@@ -23,6 +24,8 @@ function fromBodyParser(err: unknown): HttpError | null {
 
 export function toHttpError(err: unknown): HttpError {
   if (err instanceof HttpError) return err;
+  // A money rule that refuses its input (a discount leaving the maker less than nothing, say).
+  if (err instanceof MoneyRuleError) return new HttpError('invalid_request', err.message);
   if (err instanceof ZodError) {
     return new HttpError(
       'invalid_request',

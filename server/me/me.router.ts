@@ -1,6 +1,6 @@
 import express from 'express';
 
-import { activeMembershipRequestSchema,type Me } from '@/shared/schemas/session';
+import { activeMembershipRequestSchema, type Me } from '@/shared/schemas/session';
 
 import { requireSignedIn, viewerOf } from '../access/authenticate';
 import { setActiveMembershipId } from '../access/sessions.repository';

@@ -20,7 +20,14 @@ export const consignmentOutStates = [
   'closed',
 ] as const satisfies readonly ConsignmentState[];
 
-export const lineStates = ['consigned', 'sold', 'returned', 'damaged', 'lost', 'withdrawn'] as const;
+export const lineStates = [
+  'consigned',
+  'sold',
+  'returned',
+  'damaged',
+  'lost',
+  'withdrawn',
+] as const;
 export const lineStateSchema = z.enum(lineStates);
 export type LineState = z.infer<typeof lineStateSchema>;
 

@@ -12,4 +12,6 @@ export const protectedRoutes: {
   { method: 'post', path: '/api/auth/sign-out', roles: ['owner', 'assistant', 'gallery'] },
   { method: 'get', path: '/api/overview', roles: ['owner', 'assistant'] },
   { method: 'get', path: '/api/venue/consignments', roles: ['gallery'] },
+  { method: 'post', path: '/api/quotes/split', roles: ['owner', 'assistant'] },
+  { method: 'post', path: '/api/quotes/price-plan', roles: ['owner', 'assistant'] },
 ];
