@@ -1,0 +1,46 @@
+import { StyleSheet, View } from 'react-native';
+
+import { ConsignmentCard } from '@/components/ui/consignment-card';
+import { Screen } from '@/components/ui/screen';
+import { EmptyView, ErrorView, LoadingView } from '@/components/ui/status-views';
+import { Heading, Text } from '@/components/ui/text';
+import { spacing } from '@/constants/theme';
+import { useVenueHomeQuery } from '@/hooks/queries/venue-home';
+
+export function VenueHomeScreen() {
+  const query = useVenueHomeQuery();
+  return (
+    <Screen testID="venue-home-screen">
+      {query.isPending ? (
+        <LoadingView message="Finding this studio's consignments…" />
+      ) : query.isError ? (
+        <ErrorView error={query.error} onRetry={() => query.refetch()} />
+      ) : (
+        <>
+          <View style={styles.heading}>
+            <Heading level={1}>{query.data.venue.name}</Heading>
+            <Text variant="small">Work on consignment from {query.data.studio.name}</Text>
+          </View>
+          <View style={styles.list}>
+            <Heading level={2}>Consignments</Heading>
+            {query.data.consignments.length === 0 ? (
+              <EmptyView
+                title="No consignments yet"
+                message={`When ${query.data.studio.name} sends work to ${query.data.venue.name}, it is listed here.`}
+              />
+            ) : (
+              query.data.consignments.map((consignment) => (
+                <ConsignmentCard key={consignment.id} consignment={consignment} showVenue={false} />
+              ))
+            )}
+          </View>
+        </>
+      )}
+    </Screen>
+  );
+}
+
+const styles = StyleSheet.create({
+  heading: { gap: spacing.xxs },
+  list: { gap: spacing.md },
+});

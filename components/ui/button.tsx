@@ -1,0 +1,84 @@
+import { type ReactNode } from 'react';
+import { Pressable, type PressableProps, StyleSheet } from 'react-native';
+
+import { palette, radii, spacing, touchTarget } from '@/constants/theme';
+
+import { Text } from './text';
+import { focusRing, useFocusRing } from './use-focus-ring';
+
+type Variant = 'primary' | 'secondary' | 'quiet';
+
+export type ButtonProps = Omit<PressableProps, 'children' | 'style'> & {
+  label: string;
+  /** Shown instead of the label while the action runs, e.g. "Signing in…". */
+  busyLabel?: string;
+  busy?: boolean;
+  variant?: Variant;
+  icon?: ReactNode;
+};
+
+export function Button({
+  label,
+  busyLabel,
+  busy = false,
+  variant = 'primary',
+  disabled,
+  icon,
+  ...props
+}: ButtonProps) {
+  const { focused, focusProps } = useFocusRing();
+  const inactive = busy || disabled === true;
+  return (
+    <Pressable
+      role="button"
+      accessibilityState={{ disabled: inactive, busy }}
+      aria-disabled={inactive}
+      disabled={inactive}
+      {...focusProps}
+      {...props}
+      style={({ pressed }) => [
+        styles.base,
+        styles[variant],
+        pressed && pressedStyles[variant],
+        inactive && styles.inactive,
+        focused && focusRing,
+      ]}
+    >
+      {icon}
+      <Text variant="label" style={labelStyles[variant]}>
+        {busy && busyLabel ? busyLabel : label}
+      </Text>
+    </Pressable>
+  );
+}
+
+const styles = StyleSheet.create({
+  base: {
+    minHeight: touchTarget,
+    minWidth: touchTarget,
+    paddingHorizontal: spacing.lg,
+    paddingVertical: spacing.sm,
+    borderRadius: radii.md,
+    borderWidth: 1,
+    flexDirection: 'row',
+    alignItems: 'center',
+    justifyContent: 'center',
+    gap: spacing.sm,
+  },
+  primary: { backgroundColor: palette.accent, borderColor: palette.accent },
+  secondary: { backgroundColor: palette.surface, borderColor: palette.outline },
+  quiet: { backgroundColor: 'transparent', borderColor: 'transparent' },
+  inactive: { opacity: 0.7 },
+});
+
+const pressedStyles = StyleSheet.create({
+  primary: { backgroundColor: palette.accentPressed, borderColor: palette.accentPressed },
+  secondary: { backgroundColor: palette.sunken },
+  quiet: { backgroundColor: palette.sunken },
+});
+
+const labelStyles = StyleSheet.create({
+  primary: { color: palette.onAccent },
+  secondary: { color: palette.ink },
+  quiet: { color: palette.accent, textDecorationLine: 'underline' },
+});

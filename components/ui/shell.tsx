@@ -1,0 +1,225 @@
+import { Link, usePathname } from 'expo-router';
+import { type ReactNode } from 'react';
+import { Pressable, type PressableProps, StyleSheet, View } from 'react-native';
+
+import { type NavItem } from '@/constants/navigation';
+import { palette, radii, spacing, touchTarget } from '@/constants/theme';
+import { errorMessage } from '@/hooks/api-client';
+import { useSignOutMutation } from '@/hooks/session';
+import { useBreakpoint } from '@/hooks/use-breakpoint';
+import { type Membership } from '@/shared/schemas/membership';
+import { type Me } from '@/shared/schemas/session';
+
+import { Button } from './button';
+import { Notice } from './notice';
+import { Text } from './text';
+import { focusRing, useFocusRing } from './use-focus-ring';
+import { webAria } from './web-aria';
+
+type ShellProps = {
+  nav: readonly NavItem[];
+  me: Me;
+  membership: Membership;
+  children: ReactNode;
+};
+
+function isCurrent(pathname: string, href: NavItem['href']): boolean {
+  const target = typeof href === 'string' ? href : href.pathname;
+  return target === '/'
+    ? pathname === '/'
+    : pathname === target || pathname.startsWith(`${target}/`);
+}
+
+type NavPressableProps = Omit<PressableProps, 'style' | 'children'> & {
+  item: NavItem;
+  current: boolean;
+  layout: 'side' | 'tab';
+};
+
+/**
+ * The pressable inside a nav Link. A component of its own because Link's slot merges its child's
+ * `style` as a plain object, which would drop a style function or array.
+ */
+function NavPressable({ item, current, layout, ...props }: NavPressableProps) {
+  const { focused, focusProps } = useFocusRing();
+  return (
+    <Pressable
+      testID={`nav-${item.key}`}
+      role="link"
+      accessibilityState={{ selected: current }}
+      {...webAria({ 'aria-current': current ? 'page' : undefined })}
+      {...focusProps}
+      {...props}
+      style={({ pressed }) => [
+        layout === 'side' ? styles.sideLink : styles.tabLink,
+        current && styles.linkCurrent,
+        pressed && styles.linkPressed,
+        focused && focusRing,
+      ]}
+    >
+      <View
+        testID={current ? `nav-${item.key}-current` : undefined}
+        style={[layout === 'side' ? styles.sideBar : styles.tabBarMark, current && styles.markOn]}
+      />
+      <Text variant={current ? 'bodyStrong' : 'body'}>{item.label}</Text>
+    </Pressable>
+  );
+}
+
+/** One section link; the current one is marked by weight, a bar and `aria-current`, not colour alone. */
+function NavLink(props: Omit<NavPressableProps, keyof PressableProps>) {
+  return (
+    <Link href={props.item.href} asChild>
+      <NavPressable {...props} />
+    </Link>
+  );
+}
+
+function placeLine(membership: Membership): string {
+  return membership.role === 'gallery' && membership.venueName
+    ? `${membership.venueName} · work from ${membership.studioName}`
+    : membership.studioName;
+}
+
+/** The frame around every signed-in screen: side navigation when wide, a bottom bar on a phone. */
+export function Shell({ nav, me, membership, children }: ShellProps) {
+  const { wide } = useBreakpoint();
+  const pathname = usePathname();
+  const signOut = useSignOutMutation();
+  const canSwitch = me.memberships.length > 1;
+
+  const signOutButton = (
+    <Button
+      testID="sign-out"
+      label="Sign out"
+      busyLabel="Signing out…"
+      busy={signOut.isPending}
+      variant={wide ? 'secondary' : 'quiet'}
+      onPress={() => signOut.mutate()}
+    />
+  );
+  const switchLink = canSwitch ? (
+    <Link href="/choose-studio" asChild>
+      <Button testID="change-studio" label="Change studio" variant="quiet" />
+    </Link>
+  ) : null;
+  const problem = signOut.isError ? <Notice message={errorMessage(signOut.error)} /> : null;
+  const links = nav.map((item) => (
+    <NavLink
+      key={item.key}
+      item={item}
+      current={isCurrent(pathname, item.href)}
+      layout={wide ? 'side' : 'tab'}
+    />
+  ));
+
+  if (wide) {
+    return (
+      <View testID="shell-wide" style={styles.wide}>
+        <View role="navigation" testID="side-nav" style={styles.side}>
+          <Text variant="title">Saggar</Text>
+          <View style={styles.who}>
+            <Text variant="bodyStrong">{placeLine(membership)}</Text>
+            <Text variant="small">{me.user.name}</Text>
+          </View>
+          <View style={styles.sideLinks}>{links}</View>
+          <View style={styles.spacer} />
+          {switchLink}
+          {signOutButton}
+          {problem}
+        </View>
+        <View style={styles.content}>{children}</View>
+      </View>
+    );
+  }
+
+  return (
+    <View testID="shell-narrow" style={styles.narrow}>
+      <View role="banner" style={styles.header}>
+        <View style={styles.headerText}>
+          <Text variant="bodyStrong" numberOfLines={1}>
+            {placeLine(membership)}
+          </Text>
+          <Text variant="small" numberOfLines={1}>
+            {me.user.name}
+          </Text>
+        </View>
+        {switchLink}
+        {signOutButton}
+      </View>
+      {problem}
+      <View style={styles.content}>{children}</View>
+      <View role="navigation" testID="bottom-bar" style={styles.tabBar}>
+        {links}
+      </View>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wide: { flex: 1, flexDirection: 'row', backgroundColor: palette.paper },
+  side: {
+    width: 256,
+    padding: spacing.xl,
+    gap: spacing.lg,
+    backgroundColor: palette.sunken,
+    borderRightWidth: 1,
+    borderRightColor: palette.hairline,
+  },
+  who: { gap: spacing.xxs },
+  sideLinks: { gap: spacing.xs, marginTop: spacing.sm },
+  spacer: { flex: 1 },
+  sideLink: {
+    minHeight: touchTarget,
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: spacing.md,
+    paddingRight: spacing.md,
+    borderRadius: radii.md,
+  },
+  sideBar: {
+    width: 4,
+    alignSelf: 'stretch',
+    borderRadius: radii.sm,
+    backgroundColor: 'transparent',
+  },
+  linkCurrent: { backgroundColor: palette.accentSoft },
+  linkPressed: { opacity: 0.85 },
+  markOn: { backgroundColor: palette.accent },
+  content: { flex: 1 },
+  narrow: { flex: 1, backgroundColor: palette.paper },
+  header: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: spacing.sm,
+    paddingHorizontal: spacing.lg,
+    paddingVertical: spacing.sm,
+    backgroundColor: palette.sunken,
+    borderBottomWidth: 1,
+    borderBottomColor: palette.hairline,
+  },
+  headerText: { flex: 1 },
+  tabBar: {
+    flexDirection: 'row',
+    backgroundColor: palette.surface,
+    borderTopWidth: 1,
+    borderTopColor: palette.hairline,
+  },
+  tabLink: {
+    flex: 1,
+    minHeight: 56,
+    alignItems: 'center',
+    justifyContent: 'center',
+    gap: spacing.xs,
+  },
+  tabBarMark: {
+    position: 'absolute',
+    top: 0,
+    left: spacing.xl,
+    right: spacing.xl,
+    height: 4,
+    borderBottomLeftRadius: radii.sm,
+    borderBottomRightRadius: radii.sm,
+    backgroundColor: 'transparent',
+  },
+});

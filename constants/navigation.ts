@@ -1,0 +1,11 @@
+import { type Href } from 'expo-router';
+
+export type NavItem = { key: string; label: string; href: Href };
+
+/** The studio side's sections, in the order the navigation shows them. */
+export const studioNav: readonly NavItem[] = [{ key: 'overview', label: 'Overview', href: '/' }];
+
+/** A venue's sections. */
+export const venueNav: readonly NavItem[] = [
+  { key: 'consignments', label: 'Consignments', href: '/venue' },
+];

@@ -1,0 +1,50 @@
+import { type ConsignmentState, type LineState } from '@/shared/schemas/consignment';
+import { type WorkStatus } from '@/shared/schemas/work';
+
+import { type StateTone } from './theme';
+
+/** Glyphs drawn beside a state's word, so that no state is told apart by colour alone. */
+export const stateShapes = [
+  'ring',
+  'dot',
+  'half',
+  'square',
+  'open-square',
+  'diamond',
+  'triangle-right',
+  'triangle-left',
+  'bar',
+  'cross',
+] as const;
+export type StateShape = (typeof stateShapes)[number];
+
+export type StateLook = { word: string; shape: StateShape; tone: StateTone };
+
+/** Within each table every state has its own word and its own shape. */
+export const workStatusLooks: Record<WorkStatus, StateLook> = {
+  'in-studio': { word: 'In the studio', shape: 'open-square', tone: 'quiet' },
+  'on-consignment': { word: 'On consignment', shape: 'dot', tone: 'active' },
+  sold: { word: 'Sold', shape: 'square', tone: 'done' },
+  returned: { word: 'Returned', shape: 'triangle-left', tone: 'quiet' },
+  damaged: { word: 'Damaged', shape: 'diamond', tone: 'attention' },
+  lost: { word: 'Lost', shape: 'cross', tone: 'danger' },
+};
+
+export const consignmentStateLooks: Record<ConsignmentState, StateLook> = {
+  draft: { word: 'Being put together', shape: 'ring', tone: 'quiet' },
+  agreed: { word: 'Terms agreed', shape: 'half', tone: 'active' },
+  dispatched: { word: 'Sent', shape: 'triangle-right', tone: 'active' },
+  'on-show': { word: 'On show', shape: 'dot', tone: 'active' },
+  closed: { word: 'Show closed', shape: 'bar', tone: 'attention' },
+  settled: { word: 'Settled', shape: 'square', tone: 'done' },
+  cancelled: { word: 'Cancelled', shape: 'cross', tone: 'quiet' },
+};
+
+export const lineStateLooks: Record<LineState, StateLook> = {
+  consigned: { word: 'Out', shape: 'dot', tone: 'active' },
+  sold: { word: 'Sold', shape: 'square', tone: 'done' },
+  returned: { word: 'Returned', shape: 'triangle-left', tone: 'quiet' },
+  damaged: { word: 'Damaged', shape: 'diamond', tone: 'attention' },
+  lost: { word: 'Lost', shape: 'cross', tone: 'danger' },
+  withdrawn: { word: 'Withdrawn', shape: 'bar', tone: 'quiet' },
+};

@@ -1,0 +1,24 @@
+import { QueryClient } from '@tanstack/react-query';
+
+import { isRetryable } from './api-client';
+
+const second = 1000;
+const minute = 60 * second;
+
+/** How long each resource counts as fresh before React Query fetches it again. */
+export const staleTimes = {
+  session: 5 * minute,
+  overview: 30 * second,
+  venueHome: 30 * second,
+} as const;
+
+export function createQueryClient(): QueryClient {
+  return new QueryClient({
+    defaultOptions: {
+      queries: {
+        retry: (failureCount, error) => isRetryable(error) && failureCount < 2,
+      },
+      mutations: { retry: false },
+    },
+  });
+}
