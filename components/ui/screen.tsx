@@ -19,6 +19,8 @@ export function Screen({ testID, children, narrow = false }: ScreenProps) {
       style={styles.scroll}
       contentContainerStyle={[styles.content, wide && styles.contentWide]}
       keyboardShouldPersistTaps="handled"
+      // A keyboard user must be able to scroll a page that holds nothing focusable (WCAG 2.1.1).
+      focusable
     >
       <View testID={testID} role="main" style={[styles.column, narrow && styles.narrow]}>
         {children}

@@ -17,7 +17,8 @@ let server: RunningServer;
 let browser: Browser;
 
 beforeAll(async () => {
-  [server, browser] = await Promise.all([startServer(), launchBrowser()]);
+  server = await startServer();
+  browser = await launchBrowser();
 });
 
 afterAll(async () => {

@@ -1,5 +1,4 @@
 import fs from 'node:fs';
-import os from 'node:os';
 import path from 'node:path';
 
 import { AxeBuilder } from '@axe-core/playwright';
@@ -13,9 +12,11 @@ export type ViewportName = keyof typeof viewports;
 
 const screenshotDir = path.resolve(__dirname, '../../../test-results/screenshots');
 
-/** Debian's Chromium, headless, kept off the network it cannot reach anyway. */
+/**
+ * Debian's Chromium, headless, kept off the network it cannot reach anyway. Playwright gives it a
+ * fresh temporary profile of its own.
+ */
 export async function launchBrowser(): Promise<Browser> {
-  const userDataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'saggar-chromium-'));
   return chromium.launch({
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
     args: [
@@ -27,7 +28,6 @@ export async function launchBrowser(): Promise<Browser> {
       '--disable-background-networking',
       '--disable-component-update',
       '--disable-sync',
-      `--user-data-dir=${userDataDir}`,
     ],
   });
 }
