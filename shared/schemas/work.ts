@@ -1,5 +1,7 @@
 import { z } from 'zod';
 
+import { moneySchema, priceSchema } from './money';
+
 /**
  * Where a work is, derived from its latest consignment line (never stored on the work):
  * no line, or a withdrawn one, means it is in the studio.
@@ -16,5 +18,191 @@ export const workStatusSchema = z.enum(workStatuses);
 export type WorkStatus = z.infer<typeof workStatusSchema>;
 
 export const foodUses = ['food-safe', 'decorative', 'not-stated'] as const;
-export const foodUseSchema = z.enum(foodUses);
+export const foodUseSchema = z.enum(foodUses, {
+  error: 'Choose food-safe, decorative only, or not stated.',
+});
 export type FoodUse = z.infer<typeof foodUseSchema>;
+
+/** Above this a piece carries a handling caution (UK HSE INDG143 guideline weight, 16 kg). */
+export const heavyWeightG = 16_000;
+
+function text(label: string, max: number) {
+  return z
+    .string({ error: `Enter the ${label} as text.` })
+    .trim()
+    .max(max, { error: `Keep the ${label} to ${max} characters or fewer.` });
+}
+
+/** Optional text: blank becomes null, so "cleared" and "never entered" are the same. */
+function optionalText(label: string, max: number) {
+  return text(label, max)
+    .transform((v) => (v === '' ? null : v))
+    .nullable()
+    .optional();
+}
+
+function wholeNumber(label: string, min: number, max: number, unit = '') {
+  return z
+    .number({ error: `Enter the ${label} as a number.` })
+    .int({ error: `Enter the ${label} as a whole number${unit}.` })
+    .min(min, { error: `The ${label} must be at least ${min}${unit}.` })
+    .max(max, { error: `The ${label} must be at most ${max}${unit}.` })
+    .nullable()
+    .optional();
+}
+
+/** The fields a maker enters; only the title and the retail price are required. */
+const workFields = {
+  stockNumber: text('stock number', 40)
+    .min(1, { error: 'Enter a stock number, or leave it out to have one made for you.' })
+    .optional(),
+  title: text('title', 200).min(1, { error: 'Enter a title.' }),
+  year: wholeNumber('year', 1900, 2100),
+  series: optionalText('series', 120),
+  category: optionalText('category', 120),
+  clayBody: optionalText('clay body', 200),
+  glaze: optionalText('glaze', 200),
+  firingTempC: wholeNumber('firing temperature', 500, 1600, ' °C'),
+  atmosphere: optionalText('atmosphere', 80),
+  kiln: optionalText('kiln type', 80),
+  heightMm: wholeNumber('height', 1, 10_000, ' mm'),
+  widthMm: wholeNumber('width', 1, 10_000, ' mm'),
+  depthMm: wholeNumber('depth', 1, 10_000, ' mm'),
+  weightG: wholeNumber('weight', 1, 2_000_000, ' g'),
+  retailPrice: priceSchema,
+  costPrice: priceSchema.nullable().optional(),
+  foodUse: foodUseSchema.optional(),
+  careNotes: optionalText('care notes', 2000),
+  notes: optionalText('notes', 4000),
+};
+
+function sameCurrency(
+  work: { retailPrice?: { currency: string }; costPrice?: { currency: string } | null },
+  ctx: z.RefinementCtx,
+) {
+  if (work.retailPrice && work.costPrice && work.costPrice.currency !== work.retailPrice.currency) {
+    ctx.addIssue({
+      code: 'custom',
+      path: ['costPrice', 'currency'],
+      message: 'Enter the cost in the same currency as the retail price.',
+    });
+  }
+}
+
+/** `POST /api/works` */
+export const workCreateSchema = z.strictObject(workFields).superRefine(sameCurrency);
+export type WorkCreate = z.input<typeof workCreateSchema>;
+export type WorkCreateParsed = z.output<typeof workCreateSchema>;
+
+/** `PATCH /api/works/:id`: any of the same fields. */
+export const workUpdateSchema = z
+  .strictObject({ ...workFields })
+  .partial()
+  .superRefine(sameCurrency);
+export type WorkUpdate = z.input<typeof workUpdateSchema>;
+export type WorkUpdateParsed = z.output<typeof workUpdateSchema>;
+
+export const photoSchema = z.object({
+  id: z.number().int(),
+  /** 0 is the cover */
+  position: z.number().int(),
+  url: z.string(),
+  thumbnailUrl: z.string(),
+  widthPx: z.number().int().nullable(),
+  heightPx: z.number().int().nullable(),
+});
+export type Photo = z.infer<typeof photoSchema>;
+
+/** A work as the studio side sees it. The gallery side never receives this shape (it has cost). */
+export const workSchema = z.object({
+  id: z.number().int(),
+  stockNumber: z.string(),
+  title: z.string(),
+  year: z.number().int().nullable(),
+  series: z.string().nullable(),
+  category: z.string().nullable(),
+  clayBody: z.string().nullable(),
+  glaze: z.string().nullable(),
+  firingTempC: z.number().int().nullable(),
+  atmosphere: z.string().nullable(),
+  kiln: z.string().nullable(),
+  heightMm: z.number().int().nullable(),
+  widthMm: z.number().int().nullable(),
+  depthMm: z.number().int().nullable(),
+  weightG: z.number().int().nullable(),
+  retailPrice: moneySchema,
+  costPrice: moneySchema.nullable(),
+  foodUse: foodUseSchema,
+  careNotes: z.string().nullable(),
+  notes: z.string().nullable(),
+  status: workStatusSchema,
+  /** Where it is when on consignment. */
+  venue: z.object({ id: z.number().int(), name: z.string() }).nullable(),
+  photos: z.array(photoSchema),
+  archivedAt: z.string().nullable(),
+  createdAt: z.string(),
+  updatedAt: z.string(),
+});
+export type Work = z.infer<typeof workSchema>;
+
+export const workSorts = [
+  'stockNumber',
+  '-stockNumber',
+  'title',
+  '-title',
+  'year',
+  '-year',
+  'price',
+  '-price',
+  'status',
+  '-status',
+] as const;
+export const workSortSchema = z.enum(workSorts, { error: 'Choose a sort the list offers.' });
+export type WorkSort = z.infer<typeof workSortSchema>;
+
+/** `GET /api/works` query; numbers arrive as text in a URL. */
+export const workListQuerySchema = z.strictObject({
+  search: z.string().trim().max(200).optional(),
+  status: workStatusSchema.optional(),
+  series: z.string().trim().max(120).optional(),
+  category: z.string().trim().max(120).optional(),
+  venueId: z.coerce.number().int().positive().optional(),
+  archived: z.enum(['exclude', 'include', 'only']).default('exclude'),
+  sort: workSortSchema.default('stockNumber'),
+  page: z.coerce.number().int().min(1, { error: 'Pages start at 1.' }).default(1),
+  pageSize: z.coerce
+    .number()
+    .int()
+    .min(1)
+    .max(100, { error: 'Ask for at most 100 works a page.' })
+    .default(25),
+});
+export type WorkListQuery = z.input<typeof workListQuerySchema>;
+
+export const workListSchema = z.object({
+  items: z.array(workSchema),
+  total: z.number().int(),
+});
+export type WorkList = z.infer<typeof workListSchema>;
+
+/** `GET /api/works/facets`: the values the filters offer. */
+export const workFacetsSchema = z.object({
+  series: z.array(z.string()),
+  categories: z.array(z.string()),
+  venues: z.array(z.object({ id: z.number().int(), name: z.string() })),
+});
+export type WorkFacets = z.infer<typeof workFacetsSchema>;
+
+/** `PUT /api/works/:id/photos/order`: photo ids, cover first. */
+export const photoOrderSchema = z.strictObject({
+  photoIds: z.array(z.number().int().positive()).min(1, { error: 'List at least one photo.' }),
+});
+export type PhotoOrder = z.infer<typeof photoOrderSchema>;
+
+export const idParamsSchema = z.strictObject({
+  id: z.coerce.number({ error: 'The id must be a number.' }).int().positive(),
+});
+export const photoParamsSchema = z.strictObject({
+  id: z.coerce.number().int().positive(),
+  photoId: z.coerce.number().int().positive(),
+});
