@@ -17,6 +17,23 @@ const esmOnly = [
 
 const alias = { '^@/(.*)$': '<rootDir>/$1' };
 
+// jest-expo's own list of packages it compiles, plus the ESM-only ones the client reaches.
+const expoCompiled = [
+  '.pnpm',
+  'react-native',
+  '@react-native',
+  '@react-native-community',
+  'expo',
+  '@expo',
+  '@expo-google-fonts',
+  'react-navigation',
+  '@react-navigation',
+  '@sentry/react-native',
+  'native-base',
+  'standard-navigation',
+];
+const clientEsmOnly = ['dinero.js', '@dinero.js', '@tanstack'];
+
 module.exports = {
   projects: [
     {
@@ -24,6 +41,11 @@ module.exports = {
       preset: 'jest-expo',
       testMatch: ['<rootDir>/tests/components/**/*.test.tsx'],
       moduleNameMapper: alias,
+      transformIgnorePatterns: [
+        `/node_modules/(?!(${[...expoCompiled, ...clientEsmOnly].join('|')}))`,
+        '/node_modules/react-native-reanimated/plugin/',
+        '/node_modules/@react-native/babel-preset/',
+      ],
     },
     {
       displayName: 'node',

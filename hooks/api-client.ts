@@ -60,7 +60,8 @@ async function readJson(response: Response): Promise<unknown> {
   }
 }
 
-function errorFromBody(status: number, body: unknown): ApiError {
+/** The typed error for a failed response's status and parsed body. */
+export function errorFromResponse(status: number, body: unknown): ApiError {
   const parsed = apiErrorBodySchema.safeParse(body);
   if (parsed.success) {
     const { code, message, issues = [] } = parsed.data.error;
@@ -105,7 +106,7 @@ export async function apiRequest<S extends z.ZodType | undefined = undefined>(
   }
 
   const json = await readJson(response);
-  if (!response.ok) throw errorFromBody(response.status, json);
+  if (!response.ok) throw errorFromResponse(response.status, json);
   if (schema === undefined) return undefined as Result<S>;
 
   const parsed = schema.safeParse(json);

@@ -10,6 +10,10 @@ export const staleTimes = {
   session: 5 * minute,
   overview: 30 * second,
   venueHome: 30 * second,
+  works: 30 * second,
+  workFacets: minute,
+  venues: minute,
+  studio: 5 * minute,
 } as const;
 
 export function createQueryClient(): QueryClient {

@@ -10,6 +10,7 @@ export function readConfig(env: NodeJS.ProcessEnv = process.env) {
     host: env.HOST ?? '0.0.0.0',
     dbFile,
     dataDir,
+    filesDir: env.SAGGAR_FILES_DIR ?? path.join(dataDir, 'files'),
     webRoot: env.SAGGAR_WEB_ROOT ?? 'dist',
     /** Set by `npm run dev`: the Expo dev server that non-API requests are passed to. */
     webDevUrl: env.SAGGAR_WEB_DEV_URL ?? null,

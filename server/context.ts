@@ -12,6 +12,8 @@ export type AppContext = {
   /** Serves everything outside /api: the exported web app, or Expo's dev server; null for none. */
   web: RequestHandler | null;
   trustedOrigins: readonly string[];
+  /** Where uploads live, by content hash: `<dataDir>/files` (a temporary folder in tests). */
+  filesDir: string;
   /** Failed sign-ins allowed per client address in the window. */
   signInLimit: { max: number; windowMs: number };
 };

@@ -22,6 +22,7 @@ async function main() {
     secret: config.authSecret,
     web: config.webDevUrl ? await devWebProxy(config.webDevUrl) : webApp(config.webRoot),
     trustedOrigins: config.trustedOrigins,
+    filesDir: config.filesDir,
   });
   const app = createApp(context);
 

@@ -1,7 +1,7 @@
 import { toNodeHandler } from 'better-auth/node';
 import express, { type Express } from 'express';
 
-import { authenticate, requireSignedIn } from './access/authenticate';
+import { authenticate, requireRole, requireSignedIn } from './access/authenticate';
 import { type AppContext } from './context';
 import { healthRouter } from './health/health.router';
 import { apiNotFound } from './http/error-handler';
@@ -9,8 +9,12 @@ import { sameOrigin } from './http/same-origin';
 import { signInLimit } from './http/sign-in-limit';
 import { meRouter } from './me/me.router';
 import { overviewRouter } from './overview/overview.router';
+import { photoFilesRouter, workPhotosRouter } from './photos/photos.router';
 import { quotesRouter } from './quotes/quotes.router';
+import { studioRouter } from './studio/studio.router';
 import { venueHomeRouter } from './venue-home/venue-home.router';
+import { venuesRouter } from './venues/venues.router';
+import { worksRouter } from './works/works.router';
 
 /** Every API route, one line each. Order matters only where a comment says so. */
 export function mountApi(app: Express, context: AppContext): void {
@@ -24,11 +28,24 @@ export function mountApi(app: Express, context: AppContext): void {
   app.post('/api/auth/sign-in/email', signInLimit(context), authHandler);
   app.post('/api/auth/sign-out', authenticate(context), requireSignedIn, authHandler);
 
+  // A CSV import is up to 2 MB of text, JSON-escaped: more than the global limit. Read here,
+  // only for the studio roles, the body is then skipped by the global parser below.
+  app.post(
+    '/api/works/import',
+    authenticate(context),
+    requireRole('owner', 'assistant'),
+    express.json({ limit: '6mb' }),
+  );
   app.use('/api', express.json({ limit: '100kb' }), authenticate(context));
   app.use('/api/me', meRouter(context));
   app.use('/api/overview', overviewRouter(context));
   app.use('/api/venue', venueHomeRouter(context));
   app.use('/api/quotes', quotesRouter(context));
+  app.use('/api/studio', studioRouter(context));
+  app.use('/api/venues', venuesRouter(context));
+  app.use('/api/works/:id/photos', workPhotosRouter(context));
+  app.use('/api/works', worksRouter(context));
+  app.use('/api/photos', photoFilesRouter(context));
 
   app.use('/api', apiNotFound);
 }

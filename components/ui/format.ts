@@ -16,3 +16,27 @@ export function formatDate(isoDate: string): string {
 export function pieces(count: number): string {
   return `${count} ${count === 1 ? 'piece' : 'pieces'}`;
 }
+
+/** The symbol a currency is written with in en-GB: "£" for GBP, "€" for EUR, the code otherwise. */
+export function currencySymbol(currency: string): string {
+  const parts = new Intl.NumberFormat('en-GB', { style: 'currency', currency }).formatToParts(0);
+  return parts.find((part) => part.type === 'currency')?.value ?? currency;
+}
+
+/** A measurement with its unit, thousands grouped: "1,250 g". */
+export function formatMeasure(value: number | null, unit: string): string {
+  return value === null ? '—' : `${value.toLocaleString('en-GB')} ${unit}`;
+}
+
+/** Height × width × depth in millimetres, leaving out what was not measured. */
+export function formatDimensions(h: number | null, w: number | null, d: number | null): string {
+  const parts = [h, w, d].filter((v): v is number => v !== null);
+  return parts.length === 0 ? '—' : `${parts.map((v) => v.toLocaleString('en-GB')).join(' × ')} mm`;
+}
+
+/** Grams as kilograms from 1 kg, for reading: "5.2 kg", "850 g". */
+export function formatWeight(grams: number | null): string {
+  if (grams === null) return '—';
+  if (grams < 1000) return `${grams} g`;
+  return `${(grams / 1000).toLocaleString('en-GB', { maximumFractionDigits: 2 })} kg`;
+}

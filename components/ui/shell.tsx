@@ -69,7 +69,8 @@ function NavPressable({ item, current, layout, ...props }: NavPressableProps) {
 /** One section link; the current one is marked by weight, a bar and `aria-current`, not colour alone. */
 function NavLink(props: Omit<NavPressableProps, keyof PressableProps>) {
   return (
-    <Link href={props.item.href} asChild>
+    // A section is gone back to where it is already open, so sections never stack up.
+    <Link href={props.item.href} asChild dismissTo>
       <NavPressable {...props} />
     </Link>
   );

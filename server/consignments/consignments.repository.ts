@@ -8,7 +8,7 @@ import { type Db } from '../db/database';
 export async function listConsignmentSummaries(
   db: Db,
   scope: Scope,
-  filter: { states?: readonly ConsignmentState[] } = {},
+  filter: { states?: readonly ConsignmentState[]; venueId?: number } = {},
 ): Promise<ConsignmentSummary[]> {
   let query = scoped
     .consignments(db, scope)
@@ -42,6 +42,7 @@ export async function listConsignmentSummaries(
     .orderBy('consignments.dispatch_date', 'desc')
     .orderBy('consignments.id', 'desc');
   if (filter.states) query = query.where('consignments.state', 'in', filter.states);
+  if (filter.venueId) query = query.where('consignments.venue_id', '=', filter.venueId);
   const rows = await query.execute();
   return rows.map((r) => ({
     id: r.id,

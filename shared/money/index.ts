@@ -5,6 +5,7 @@ export * from './exposure';
 export * from './format';
 export * from './insurance';
 export * from './markup';
+export * from './parse';
 export * from './payment-terms';
 export * from './price-plan';
 export * from './quotes';

@@ -26,3 +26,13 @@ export type FindingKind = z.infer<typeof findingKindSchema>;
 export const conditionGrades = ['sound', 'slight', 'marked', 'serious'] as const;
 export const conditionGradeSchema = z.enum(conditionGrades);
 export type ConditionGrade = z.infer<typeof conditionGradeSchema>;
+
+/**
+ * A report's overall grade: its most serious finding's grade, `sound` with none (Collections
+ * Trust, Spectrum "Condition": the overall condition is that of the most serious one).
+ */
+export function overallGrade(findingGrades: readonly ConditionGrade[]): ConditionGrade {
+  let worst = 0;
+  for (const grade of findingGrades) worst = Math.max(worst, conditionGrades.indexOf(grade));
+  return conditionGrades[worst]!;
+}

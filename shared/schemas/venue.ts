@@ -41,10 +41,12 @@ const venueFields = {
     .optional(),
   contactName: optionalText('contact name', 200),
   email: z
-    .email({ error: 'Enter an e-mail address such as name@example.com.' })
+    .string({ error: 'Enter an e-mail address such as name@example.com.' })
+    .trim()
+    .transform((v) => (v === '' ? null : v))
+    .pipe(z.email({ error: 'Enter an e-mail address such as name@example.com.' }).nullable())
     .nullable()
-    .optional()
-    .or(z.literal('').transform(() => null)),
+    .optional(),
   phone: optionalText('phone number', 40),
   vatNumber: optionalText('VAT number', 20),
   defaultTerms: termsSchema,
@@ -96,12 +98,21 @@ export const venueCreateSchema = z
 export type VenueCreate = z.input<typeof venueCreateSchema>;
 export type VenueCreateParsed = z.output<typeof venueCreateSchema>;
 
-/** `PATCH /api/venues/:id` */
+/**
+ * `PATCH /api/venues/:id`. A postcode sent without the country is checked (and normalised) by the
+ * server against the venue's stored country, not taken to be British here.
+ */
 export const venueUpdateSchema = z
   .strictObject(venueFields)
   .partial()
-  .superRefine(checkIdentifiers)
-  .transform(normalise);
+  .superRefine((venue, ctx) =>
+    checkIdentifiers(venue.country === undefined ? { ...venue, postcode: null } : venue, ctx),
+  )
+  .transform((venue) =>
+    venue.country === undefined
+      ? { ...normalise({ ...venue, postcode: null }), postcode: venue.postcode }
+      : normalise(venue),
+  );
 export type VenueUpdate = z.input<typeof venueUpdateSchema>;
 export type VenueUpdateParsed = z.output<typeof venueUpdateSchema>;
 
@@ -139,3 +150,11 @@ export const venueDetailSchema = z.object({
   staff: z.array(z.object({ userId: z.string(), name: z.string(), email: z.string() })),
 });
 export type VenueDetail = z.infer<typeof venueDetailSchema>;
+
+/** `GET /api/venues` */
+export const venueListQuerySchema = z.strictObject({
+  archived: z
+    .enum(['exclude', 'include', 'only'], { error: 'Choose exclude, include or only.' })
+    .default('exclude'),
+});
+export type VenueListQuery = z.input<typeof venueListQuerySchema>;

@@ -25,6 +25,29 @@ export const importFields = [
 export const importFieldSchema = z.enum(importFields);
 export type ImportField = z.infer<typeof importFieldSchema>;
 
+/** Column headers for each field: the export writes them and the import recognises them. */
+export const importFieldLabels: Readonly<Record<ImportField, string>> = {
+  stockNumber: 'Stock number',
+  title: 'Title',
+  year: 'Year',
+  series: 'Series',
+  category: 'Category',
+  clayBody: 'Clay body',
+  glaze: 'Glaze',
+  firingTempC: 'Firing temperature (°C)',
+  atmosphere: 'Atmosphere',
+  kiln: 'Kiln',
+  heightMm: 'Height (mm)',
+  widthMm: 'Width (mm)',
+  depthMm: 'Depth (mm)',
+  weightG: 'Weight (g)',
+  retailPrice: 'Retail price',
+  costPrice: 'Cost price',
+  foodUse: 'Food use',
+  careNotes: 'Care notes',
+  notes: 'Notes',
+};
+
 /** 2 MB of CSV is several thousand works; more than that is better split. */
 export const maxImportCsvLength = 2_000_000;
 

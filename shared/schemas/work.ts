@@ -41,10 +41,11 @@ function optionalText(label: string, max: number) {
     .optional();
 }
 
-function wholeNumber(label: string, min: number, max: number, unit = '') {
+/** `unit` is the symbol after a figure (" mm"); `unitName` the word in a sentence ("millimetres"). */
+function wholeNumber(label: string, min: number, max: number, unit = '', unitName = '') {
   return z
     .number({ error: `Enter the ${label} as a number.` })
-    .int({ error: `Enter the ${label} as a whole number${unit}.` })
+    .int({ error: `Enter the ${label} as a whole number${unitName ? ` of ${unitName}` : ''}.` })
     .min(min, { error: `The ${label} must be at least ${min}${unit}.` })
     .max(max, { error: `The ${label} must be at most ${max}${unit}.` })
     .nullable()
@@ -62,14 +63,14 @@ const workFields = {
   category: optionalText('category', 120),
   clayBody: optionalText('clay body', 200),
   glaze: optionalText('glaze', 200),
-  firingTempC: wholeNumber('firing temperature', 500, 1600, ' °C'),
+  firingTempC: wholeNumber('firing temperature', 500, 1600, ' °C', 'degrees Celsius'),
   atmosphere: optionalText('atmosphere', 80),
   kiln: optionalText('kiln type', 80),
-  heightMm: wholeNumber('height', 1, 10_000, ' mm'),
-  widthMm: wholeNumber('width', 1, 10_000, ' mm'),
-  depthMm: wholeNumber('depth', 1, 10_000, ' mm'),
-  weightG: wholeNumber('weight', 1, 2_000_000, ' g'),
-  retailPrice: priceSchema,
+  heightMm: wholeNumber('height', 1, 10_000, ' mm', 'millimetres'),
+  widthMm: wholeNumber('width', 1, 10_000, ' mm', 'millimetres'),
+  depthMm: wholeNumber('depth', 1, 10_000, ' mm', 'millimetres'),
+  weightG: wholeNumber('weight', 1, 2_000_000, ' g', 'grams'),
+  retailPrice: z.strictObject(priceSchema.shape, { error: 'Enter the retail price.' }),
   costPrice: priceSchema.nullable().optional(),
   foodUse: foodUseSchema.optional(),
   careNotes: optionalText('care notes', 2000),
@@ -206,3 +207,16 @@ export const photoParamsSchema = z.strictObject({
   id: z.coerce.number().int().positive(),
   photoId: z.coerce.number().int().positive(),
 });
+
+/** `GET /api/photos/:photoId` and `…/thumbnail` */
+export const photoFileParamsSchema = z.strictObject({
+  photoId: z.coerce.number({ error: 'The photo id must be a number.' }).int().positive(),
+});
+
+/** What the photo routes answer: the work's photos, cover first. */
+export const workPhotosSchema = z.array(photoSchema);
+export type WorkPhotos = z.infer<typeof workPhotosSchema>;
+
+/** `GET /api/works/export.csv`: the list's filters and sort, without paging. */
+export const workExportQuerySchema = workListQuerySchema.omit({ page: true, pageSize: true });
+export type WorkExportQuery = z.input<typeof workExportQuerySchema>;

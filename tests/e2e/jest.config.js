@@ -11,5 +11,7 @@ module.exports = {
       { jsc: { parser: { syntax: 'typescript' }, target: 'es2022' }, module: { type: 'commonjs' } },
     ],
   },
+  // The shared schemas reach dinero.js, which ships only ES modules.
+  transformIgnorePatterns: ['/node_modules/(?!(dinero\\.js|@dinero\\.js)/)'],
   testTimeout: 60_000,
 };

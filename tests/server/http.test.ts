@@ -128,6 +128,7 @@ describe('the web app', () => {
         secret: 'test-secret-that-is-long-enough-for-better-auth',
         web: webApp(root),
         trustedOrigins: [],
+        filesDir: path.join(root, 'files'),
       }),
     );
     const deep = await request(app).get('/works/12');
@@ -135,7 +136,7 @@ describe('the web app', () => {
     expect(deep.text).toContain('<title>Saggar</title>');
     const asset = await request(app).get('/app.js');
     expect(asset.text).toBe('console.log(1)');
-    const api = await request(app).get('/api/works/12');
+    const api = await request(app).get('/api/no-such-resource/12');
     expect(api.status).toBe(404);
     expect(api.body.error.code).toBe('not_found');
   });

@@ -1,3 +1,7 @@
+import { randomUUID } from 'node:crypto';
+import os from 'node:os';
+import path from 'node:path';
+
 import pino from 'pino';
 import request from 'supertest';
 
@@ -25,6 +29,8 @@ export async function createTestApp(
     secret: 'test-secret-that-is-long-enough-for-better-auth',
     web: null,
     trustedOrigins: [],
+    // Created on the first upload; each app has its own, so tests never share stored files.
+    filesDir: path.join(os.tmpdir(), 'saggar-test-files', randomUUID()),
     ...options,
   });
   return { app: createApp(context), db, context };

@@ -1,0 +1,16 @@
+import { Stack, useLocalSearchParams } from 'expo-router';
+
+import { NotFoundScreen } from '@/components/screens/not-found/not-found-screen';
+import { WorkEditScreen } from '@/components/screens/work-form/work-edit-screen';
+
+export default function EditWorkRoute() {
+  const { id } = useLocalSearchParams<{ id: string }>();
+  const workId = Number(id);
+  if (!Number.isInteger(workId) || workId <= 0) return <NotFoundScreen />;
+  return (
+    <>
+      <Stack.Screen options={{ title: 'Edit work · Saggar' }} />
+      <WorkEditScreen id={workId} />
+    </>
+  );
+}

@@ -1,0 +1,125 @@
+import { useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+
+import { Card } from '@/components/ui/card';
+import { parseMoneyText } from '@/components/ui/decimal-text';
+import { MoneyField } from '@/components/ui/money-field';
+import { Heading, Text } from '@/components/ui/text';
+import { palette, spacing } from '@/constants/theme';
+import { formatMoney } from '@/shared/money/format';
+import { makerNet, trySplitSale, venueKeeps } from '@/shared/money/split';
+import { type Money } from '@/shared/schemas/money';
+
+import { previewTerms, type TermsFormValues } from './venue-form-values';
+
+function Line({
+  label,
+  money,
+  testID,
+  strong = false,
+}: {
+  label: string;
+  money: Money;
+  testID: string;
+  strong?: boolean;
+}) {
+  return (
+    <View style={styles.line}>
+      <Text variant={strong ? 'bodyStrong' : 'body'} style={styles.lineLabel}>
+        {label}
+      </Text>
+      <Text variant="number" testID={testID} style={[styles.amount, strong && styles.strong]}>
+        {formatMoney(money)}
+      </Text>
+    </View>
+  );
+}
+
+/**
+ * What the maker nets on a sample sale under the terms as they stand in the form, worked out on
+ * the client by the shared money engine as a preview; the server works it out again for real.
+ */
+export function NetPreview({ values }: { values: TermsFormValues }) {
+  const currency = values.currency.trim().toUpperCase();
+  const [sampleText, setSampleText] = useState('100');
+  const terms = previewTerms(values);
+  const sample = terms ? parseMoneyText(sampleText, terms.currency) : null;
+
+  let body: React.ReactNode;
+  if (terms === null) {
+    body = <Text variant="small">Complete the rates above to see what you would net.</Text>;
+  } else if (sample === null || sample.kind !== 'ok') {
+    body = <Text variant="small">Enter a sample price to see the split.</Text>;
+  } else {
+    const split = trySplitSale(terms, sample.value, sample.value);
+    if (split === null) {
+      body = (
+        <Text style={styles.problem}>
+          Under these terms the commission and its VAT would be more than the sale brings in.
+        </Text>
+      );
+    } else {
+      const registered = terms.makerVatRegistered;
+      body = (
+        <View style={styles.lines} aria-live="polite">
+          <Line label="The buyer pays" money={sample.value} testID="net-preview-price" />
+          <Line
+            label="The venue keeps"
+            money={venueKeeps(terms, split)}
+            testID="net-preview-venue"
+          />
+          {terms.commissionVat !== 'none' ? (
+            <Line
+              label="of which VAT on commission"
+              money={split.vatOnCommission}
+              testID="net-preview-vat"
+            />
+          ) : null}
+          <Line
+            label="You receive"
+            money={split.makerShare}
+            testID="net-preview-share"
+            strong={!registered}
+          />
+          {registered ? (
+            <Line
+              label="You net after VAT"
+              money={makerNet(split)}
+              testID="net-preview-net"
+              strong
+            />
+          ) : null}
+          <Line label="Insured for" money={split.insuranceValue} testID="net-preview-insured" />
+        </View>
+      );
+    }
+  }
+
+  return (
+    <Card testID="net-preview" style={styles.card}>
+      <Heading level={3}>What you would net</Heading>
+      <MoneyField
+        testID="net-preview-sample"
+        label="On a sale at"
+        currency={/^[A-Z]{3}$/.test(currency) ? currency : 'GBP'}
+        value={sampleText}
+        onChangeText={setSampleText}
+      />
+      {body}
+      <Text variant="small">
+        A preview from Saggar’s money rules; VAT figures are guidance, so check them with HMRC or an
+        accountant.
+      </Text>
+    </Card>
+  );
+}
+
+const styles = StyleSheet.create({
+  card: { gap: spacing.md, backgroundColor: palette.accentSoft, borderColor: palette.accent },
+  lines: { gap: spacing.xs },
+  line: { flexDirection: 'row', alignItems: 'baseline', gap: spacing.md },
+  lineLabel: { flex: 1 },
+  amount: { textAlign: 'right', minWidth: 96 },
+  strong: { fontFamily: 'AtkinsonHyperlegibleNext_600SemiBold' },
+  problem: { color: palette.danger },
+});

@@ -1,0 +1,331 @@
+import { type ReactNode } from 'react';
+import { type Control, Controller, type Resolver, useForm, useWatch } from 'react-hook-form';
+import { StyleSheet, View } from 'react-native';
+
+import { Button } from '@/components/ui/button';
+import { Card } from '@/components/ui/card';
+import { Choice, type ChoiceOption } from '@/components/ui/choice';
+import { serverErrors } from '@/components/ui/form-errors';
+import { MoneyField } from '@/components/ui/money-field';
+import { Notice } from '@/components/ui/notice';
+import { NumberField } from '@/components/ui/number-field';
+import { Heading, Text } from '@/components/ui/text';
+import { TextField, type TextFieldProps } from '@/components/ui/text-field';
+import { spacing } from '@/constants/theme';
+import { useBreakpoint } from '@/hooks/use-breakpoint';
+
+import { NetPreview } from './net-preview';
+import { type VenueField, venueFieldFor, type VenueFormValues } from './venue-form-values';
+import {
+  commissionVatWords,
+  discountRuleWords,
+  insuranceBasisWords,
+  insurerWords,
+  options,
+  paymentFromWords,
+  venueKindWords,
+  venueRoleWords,
+} from './venue-words';
+
+type AnyControl = Control<VenueFormValues, unknown, object>;
+type TextName = {
+  [K in VenueField]: VenueFormValues[K] extends string
+    ? string extends VenueFormValues[K]
+      ? K
+      : never
+    : never;
+}[VenueField];
+type ChoiceName = Exclude<VenueField, TextName>;
+
+type InputProps = Omit<TextFieldProps, 'testID' | 'value' | 'onChangeText'> & {
+  control: AnyControl;
+  name: TextName;
+  kind?: 'text' | 'percent' | 'number' | 'money';
+  unit?: string;
+  currency?: string;
+};
+
+function Input({ control, name, kind = 'text', unit, currency = 'GBP', ...props }: InputProps) {
+  return (
+    <Controller
+      control={control}
+      name={name}
+      render={({ field, fieldState }) => {
+        const common = {
+          ...props,
+          ref: field.ref,
+          testID: `venue-${name}`,
+          value: field.value as string,
+          onChangeText: field.onChange,
+          onBlur: field.onBlur,
+          error: fieldState.error?.message,
+        };
+        if (kind === 'money') return <MoneyField {...common} currency={currency} />;
+        if (kind === 'percent') return <NumberField {...common} unit="%" decimal />;
+        if (kind === 'number') return <NumberField {...common} unit={unit} />;
+        return <TextField {...common} />;
+      }}
+    />
+  );
+}
+
+function Pick<N extends ChoiceName>({
+  control,
+  name,
+  label,
+  choices,
+  hint,
+}: {
+  control: AnyControl;
+  name: N;
+  label: string;
+  choices: ChoiceOption<VenueFormValues[N] & string>[];
+  hint?: string;
+}) {
+  return (
+    <Controller
+      control={control}
+      name={name}
+      render={({ field, fieldState }) => (
+        <Choice
+          testID={`venue-${name}`}
+          label={label}
+          hint={hint}
+          options={choices}
+          value={field.value as VenueFormValues[N] & string}
+          onChange={field.onChange}
+          error={fieldState.error?.message}
+        />
+      )}
+    />
+  );
+}
+
+function Row({ children }: { children: ReactNode }) {
+  return <View style={styles.row}>{children}</View>;
+}
+function Cell({ children, basis = 200 }: { children: ReactNode; basis?: number }) {
+  return <View style={[styles.cell, { flexBasis: basis }]}>{children}</View>;
+}
+
+type VenueFormProps<Parsed extends object> = {
+  defaultValues: VenueFormValues;
+  resolver: Resolver<VenueFormValues, unknown, Parsed>;
+  onSubmit: (values: Parsed) => Promise<void>;
+  submitLabel: string;
+  label: string;
+};
+
+/** A venue and its default terms, with what the maker would net shown beside the terms. */
+export function VenueForm<Parsed extends object>({
+  defaultValues,
+  resolver,
+  onSubmit,
+  submitLabel,
+  label,
+}: VenueFormProps<Parsed>) {
+  const { wide } = useBreakpoint();
+  const { control, handleSubmit, setError, formState } = useForm<VenueFormValues, unknown, Parsed>({
+    resolver,
+    defaultValues,
+  });
+  const any = control as unknown as AnyControl;
+  const values = useWatch({ control });
+  const terms = { ...defaultValues, ...values } as VenueFormValues;
+  const currency = /^[A-Z]{3}$/.test(terms.currency.trim().toUpperCase())
+    ? terms.currency.trim().toUpperCase()
+    : 'GBP';
+
+  const submit = handleSubmit(async (parsed) => {
+    try {
+      await onSubmit(parsed);
+    } catch (error) {
+      const message = serverErrors(error, venueFieldFor, (field, e) => setError(field, e));
+      if (message !== null) setError('root.server', { message });
+    }
+  });
+  const formError = formState.errors.root?.server?.message;
+  const fieldCount = Object.keys(formState.errors).filter((key) => key !== 'root').length;
+
+  const termsFields = (
+    <Card style={styles.section}>
+      <Heading level={2}>Default terms</Heading>
+      <Text variant="small">
+        Copied onto each consignment when it is agreed; change them there if a show differs.
+      </Text>
+      <Row>
+        <Cell basis={140}>
+          <Input control={any} name="commissionRate" label="Commission" kind="percent" />
+        </Cell>
+        <Cell basis={140}>
+          <Input control={any} name="vatRate" label="VAT rate" kind="percent" />
+        </Cell>
+        <Cell basis={120}>
+          <Input
+            control={any}
+            name="currency"
+            label="Currency"
+            autoCapitalize="characters"
+            maxLength={3}
+          />
+        </Cell>
+      </Row>
+      <Pick control={any} name="venueRole" label="The venue" choices={options(venueRoleWords)} />
+      <Pick
+        control={any}
+        name="commissionVat"
+        label="VAT on the commission"
+        choices={options(commissionVatWords)}
+      />
+      <Pick
+        control={any}
+        name="makerVatRegistered"
+        label="Are you VAT-registered?"
+        choices={[
+          { value: 'no', label: 'No' },
+          { value: 'yes', label: 'Yes' },
+        ]}
+      />
+      <Pick
+        control={any}
+        name="discountRule"
+        label="Who bears a discount"
+        choices={options(discountRuleWords)}
+      />
+      <Pick
+        control={any}
+        name="insuranceBasis"
+        label="Insured at"
+        choices={options(insuranceBasisWords)}
+      />
+      {terms.insuranceBasis === 'agreed' ? (
+        <Input
+          control={any}
+          name="agreedInsuranceValue"
+          label="Agreed insurance value"
+          kind="money"
+          currency={currency}
+        />
+      ) : null}
+      <Pick control={any} name="insuredBy" label="Who insures" choices={options(insurerWords)} />
+      <Row>
+        <Cell basis={140}>
+          <Input
+            control={any}
+            name="paymentDays"
+            label="Payment within"
+            kind="number"
+            unit="days"
+          />
+        </Cell>
+      </Row>
+      <Pick
+        control={any}
+        name="paymentFrom"
+        label="Counted from"
+        choices={options(paymentFromWords)}
+      />
+    </Card>
+  );
+
+  return (
+    <View role="form" aria-label={label} style={styles.form}>
+      <Card style={styles.section}>
+        <Heading level={2}>The venue</Heading>
+        <Input control={any} name="name" label="Name" />
+        <Pick control={any} name="kind" label="Kind" choices={options(venueKindWords)} />
+        <Row>
+          <Cell>
+            <Input control={any} name="contactName" label="Contact name (optional)" />
+          </Cell>
+          <Cell>
+            <Input
+              control={any}
+              name="email"
+              label="E-mail (optional)"
+              inputMode="email"
+              autoCapitalize="none"
+              autoCorrect={false}
+            />
+          </Cell>
+          <Cell>
+            <Input control={any} name="phone" label="Phone (optional)" inputMode="tel" />
+          </Cell>
+        </Row>
+        <Input control={any} name="addressLine1" label="Address (optional)" />
+        <Input control={any} name="addressLine2" label="Address, second line (optional)" />
+        <Row>
+          <Cell>
+            <Input control={any} name="town" label="Town (optional)" />
+          </Cell>
+          <Cell basis={140}>
+            <Input
+              control={any}
+              name="postcode"
+              label="Postcode (optional)"
+              autoCapitalize="characters"
+            />
+          </Cell>
+          <Cell basis={120}>
+            <Input
+              control={any}
+              name="country"
+              label="Country"
+              hint="Two letters, e.g. GB"
+              autoCapitalize="characters"
+              maxLength={2}
+            />
+          </Cell>
+        </Row>
+        <Input
+          control={any}
+          name="vatNumber"
+          label="Venue’s VAT number (optional)"
+          autoCapitalize="characters"
+        />
+      </Card>
+
+      <View style={[styles.terms, wide && styles.termsWide]}>
+        <View style={styles.termsFields}>{termsFields}</View>
+        <View style={[styles.preview, wide && styles.previewWide]}>
+          <NetPreview values={terms} />
+        </View>
+      </View>
+
+      <Card style={styles.section}>
+        <Heading level={2}>Notes</Heading>
+        <Input control={any} name="notes" label="Notes (optional)" multiline />
+      </Card>
+
+      {formError ? <Notice testID="venue-form-error" message={formError} /> : null}
+      {!formError && fieldCount > 0 ? (
+        <Notice
+          testID="venue-form-fields"
+          message={`${fieldCount === 1 ? 'One field needs' : `${fieldCount} fields need`} another look; see the messages by ${fieldCount === 1 ? 'it' : 'them'}.`}
+        />
+      ) : null}
+      <View style={styles.submit}>
+        <Button
+          testID="venue-submit"
+          label={submitLabel}
+          busyLabel="Saving…"
+          busy={formState.isSubmitting}
+          onPress={submit}
+        />
+      </View>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  form: { gap: spacing.lg },
+  section: { gap: spacing.md },
+  row: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.md },
+  cell: { flexGrow: 1, minWidth: 110 },
+  terms: { gap: spacing.lg },
+  termsWide: { flexDirection: 'row', alignItems: 'flex-start' },
+  termsFields: { flex: 1 },
+  preview: {},
+  previewWide: { width: 320 },
+  submit: { alignSelf: 'flex-start' },
+});

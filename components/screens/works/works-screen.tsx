@@ -1,0 +1,277 @@
+import { type SortingState, type Updater, useTable } from '@tanstack/react-table';
+import { Link } from 'expo-router';
+import { useEffect, useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+
+import { Button } from '@/components/ui/button';
+import { DataTable, dataTableFeatures } from '@/components/ui/data-table';
+import { DownloadLink } from '@/components/ui/download-link';
+import { FilterBar, FilterSlot } from '@/components/ui/filter-bar';
+import { Pager } from '@/components/ui/pager';
+import { Screen } from '@/components/ui/screen';
+import { Select } from '@/components/ui/select';
+import { EmptyView, ErrorView, LoadingView } from '@/components/ui/status-views';
+import { Heading, Text } from '@/components/ui/text';
+import { TextField } from '@/components/ui/text-field';
+import { workStatusLooks } from '@/constants/states';
+import { spacing } from '@/constants/theme';
+import {
+  useWorkFacetsQuery,
+  useWorksQuery,
+  worksExportPath,
+  type WorksFilter,
+} from '@/hooks/queries/works';
+import { useBreakpoint } from '@/hooks/use-breakpoint';
+import {
+  type Work,
+  type WorkSort,
+  workSortSchema,
+  type WorkStatus,
+  workStatuses,
+  workStatusSchema,
+} from '@/shared/schemas/work';
+
+import { WorkCard } from './work-card';
+import { workColumns } from './work-columns';
+
+const pageSize = 25;
+const noWorks: Work[] = [];
+const statusOptions = workStatuses.map((s) => ({ value: s, label: workStatusLooks[s].word }));
+const sortOptions: { value: WorkSort; label: string }[] = [
+  { value: 'stockNumber', label: 'Stock number' },
+  { value: '-stockNumber', label: 'Stock number, newest first' },
+  { value: 'title', label: 'Title, A to Z' },
+  { value: '-title', label: 'Title, Z to A' },
+  { value: '-year', label: 'Year, newest first' },
+  { value: 'year', label: 'Year, oldest first' },
+  { value: 'price', label: 'Price, lowest first' },
+  { value: '-price', label: 'Price, highest first' },
+  { value: 'status', label: 'Status' },
+];
+const archivedOptions = [
+  { value: 'include', label: 'Current and archived' },
+  { value: 'only', label: 'Archived only' },
+];
+
+/** The server's sort name as react-table's sorting state, and back. */
+function toSorting(sort: WorkSort): SortingState {
+  const desc = sort.startsWith('-');
+  return [{ id: desc ? sort.slice(1) : sort, desc }];
+}
+function fromSorting(sorting: SortingState): WorkSort {
+  const first = sorting[0];
+  if (!first) return 'stockNumber';
+  const parsed = workSortSchema.safeParse(`${first.desc ? '-' : ''}${first.id}`);
+  return parsed.success ? parsed.data : 'stockNumber';
+}
+
+/** Waits until typing pauses before asking the server again. */
+function useDebounced(value: string, ms = 300): string {
+  const [settled, setSettled] = useState(value);
+  useEffect(() => {
+    const timer = setTimeout(() => setSettled(value), ms);
+    return () => clearTimeout(timer);
+  }, [value, ms]);
+  return settled;
+}
+
+export function WorksScreen() {
+  const { wide } = useBreakpoint();
+  const [searchText, setSearchText] = useState('');
+  const search = useDebounced(searchText.trim());
+  const [status, setStatus] = useState<WorkStatus | ''>('');
+  const [series, setSeries] = useState('');
+  const [category, setCategory] = useState('');
+  const [venueId, setVenueId] = useState('');
+  const [archived, setArchived] = useState<'exclude' | 'include' | 'only'>('exclude');
+  const [sort, setSort] = useState<WorkSort>('stockNumber');
+  // A page belongs to one search, filter and sort: change any of them and it is page 1 again.
+  const filterKey = JSON.stringify([search, status, series, category, venueId, archived, sort]);
+  const [paging, setPaging] = useState({ key: filterKey, page: 1 });
+  const page = paging.key === filterKey ? paging.page : 1;
+  const setPage = (next: number) => setPaging({ key: filterKey, page: next });
+
+  const filters: WorksFilter = {
+    search: search || undefined,
+    status: status || undefined,
+    series: series || undefined,
+    category: category || undefined,
+    venueId: venueId ? Number(venueId) : undefined,
+    archived,
+    sort,
+    page,
+    pageSize,
+  };
+  const filtered = Boolean(
+    search || status || series || category || venueId || archived !== 'exclude',
+  );
+
+  const works = useWorksQuery(filters);
+  const facets = useWorkFacetsQuery();
+
+  const sorting = toSorting(sort);
+  const table = useTable({
+    features: dataTableFeatures,
+    columns: workColumns,
+    data: works.data?.items ?? noWorks,
+    getRowId: (work) => String(work.id),
+    manualSorting: true,
+    manualPagination: true,
+    enableSortingRemoval: false,
+    // Every column starts ascending, as its header arrow shows; a second press reverses it.
+    sortDescFirst: false,
+    rowCount: works.data?.total ?? 0,
+    state: { sorting, pagination: { pageIndex: page - 1, pageSize } },
+    onSortingChange: (updater: Updater<SortingState>) => {
+      const next = typeof updater === 'function' ? updater(sorting) : updater;
+      setSort(fromSorting(next));
+    },
+  });
+
+  return (
+    <Screen testID="works-screen">
+      <View style={styles.header}>
+        <View style={styles.title}>
+          <Heading level={1}>Works</Heading>
+          <Text variant="small">Every piece on record, with where it is now.</Text>
+        </View>
+        <View style={styles.actions}>
+          <Link href="/works/new" asChild>
+            <Button testID="works-new" label="New work" />
+          </Link>
+          <Link href="/works/import" asChild>
+            <Button testID="works-import" label="Import CSV" variant="secondary" />
+          </Link>
+          <DownloadLink
+            href={worksExportPath}
+            fileName="saggar-works.csv"
+            label="Export CSV"
+            testID="works-export"
+          />
+        </View>
+      </View>
+
+      <FilterBar testID="works-filters">
+        <FilterSlot grow={2}>
+          <TextField
+            testID="works-search"
+            label="Search"
+            placeholder="Title, stock number, glaze…"
+            value={searchText}
+            onChangeText={setSearchText}
+            autoCorrect={false}
+            inputMode="search"
+          />
+        </FilterSlot>
+        <FilterSlot>
+          <Select
+            testID="works-filter-status"
+            label="Status"
+            emptyLabel="Any status"
+            options={statusOptions}
+            value={status}
+            onChange={(v) => setStatus(workStatusSchema.safeParse(v).data ?? '')}
+          />
+        </FilterSlot>
+        <FilterSlot>
+          <Select
+            testID="works-filter-series"
+            label="Series"
+            emptyLabel="Any series"
+            options={(facets.data?.series ?? []).map((s) => ({ value: s, label: s }))}
+            value={series}
+            onChange={setSeries}
+          />
+        </FilterSlot>
+        <FilterSlot>
+          <Select
+            testID="works-filter-category"
+            label="Category"
+            emptyLabel="Any category"
+            options={(facets.data?.categories ?? []).map((c) => ({ value: c, label: c }))}
+            value={category}
+            onChange={setCategory}
+          />
+        </FilterSlot>
+        <FilterSlot>
+          <Select
+            testID="works-filter-venue"
+            label="At venue"
+            emptyLabel="Anywhere"
+            options={(facets.data?.venues ?? []).map((v) => ({
+              value: String(v.id),
+              label: v.name,
+            }))}
+            value={venueId}
+            onChange={setVenueId}
+          />
+        </FilterSlot>
+        <FilterSlot>
+          <Select
+            testID="works-filter-archived"
+            label="Archived"
+            emptyLabel="Current only"
+            options={archivedOptions}
+            value={archived === 'exclude' ? '' : archived}
+            onChange={(v) => setArchived(v === 'include' || v === 'only' ? v : 'exclude')}
+          />
+        </FilterSlot>
+        {wide ? null : (
+          <FilterSlot>
+            <Select
+              testID="works-sort"
+              label="Sort by"
+              options={sortOptions}
+              value={sort}
+              onChange={(v) => setSort(workSortSchema.safeParse(v).data ?? 'stockNumber')}
+            />
+          </FilterSlot>
+        )}
+      </FilterBar>
+
+      {works.isPending ? (
+        <LoadingView message="Fetching the catalogue…" />
+      ) : works.isError ? (
+        <ErrorView error={works.error} onRetry={() => works.refetch()} />
+      ) : works.data.total === 0 ? (
+        filtered ? (
+          <EmptyView
+            title="Nothing matches"
+            message="No work matches this search and these filters. Clear a filter or try other words."
+          />
+        ) : (
+          <EmptyView
+            title="No works yet"
+            message="Add the first piece with New work, or bring in a spreadsheet with Import CSV."
+          />
+        )
+      ) : (
+        <View style={styles.list}>
+          <DataTable
+            table={table}
+            label="Works"
+            testID="works"
+            rowTestID={(row) => `work-row-${row.original.id}`}
+            renderCard={(row) => <WorkCard work={row.original} />}
+            minWidth={760}
+          />
+          <Pager
+            testID="works-pager"
+            page={page}
+            pageCount={table.getPageCount()}
+            total={works.data.total}
+            noun={['work', 'works']}
+            onPage={setPage}
+          />
+        </View>
+      )}
+    </Screen>
+  );
+}
+
+const styles = StyleSheet.create({
+  header: { gap: spacing.md },
+  title: { gap: spacing.xxs },
+  actions: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
+  list: { gap: spacing.lg },
+});

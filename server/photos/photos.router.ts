@@ -1,0 +1,75 @@
+import express, { type Response } from 'express';
+
+import {
+  idParamsSchema,
+  photoFileParamsSchema,
+  photoOrderSchema,
+  photoParamsSchema,
+} from '@/shared/schemas/work';
+
+import { requireRole, scopeOf } from '../access/authenticate';
+import { type AppContext } from '../context';
+import { notFound } from '../http/http-error';
+import { validate } from '../http/validate';
+import { photoStore, thumbnailMimeType } from './photo-store';
+import { findPhotoFile } from './photos.repository';
+import { deletePhoto, setPhotoOrder, uploadPhotos } from './photos.service';
+import { receivePhotos, uploadedFiles } from './upload';
+
+const upload = validate({ params: idParamsSchema });
+const order = validate({ params: idParamsSchema, body: photoOrderSchema });
+const remove = validate({ params: photoParamsSchema });
+const file = validate({ params: photoFileParamsSchema });
+
+/** `/api/works/:id/photos`: a work's photos, for the studio side. */
+export function workPhotosRouter({ db, filesDir }: AppContext) {
+  const store = photoStore(filesDir);
+  return express
+    .Router({ mergeParams: true })
+    .use(requireRole('owner', 'assistant'))
+    .post('/', upload, receivePhotos, async (req, res) => {
+      const { id } = upload.input(res).params;
+      res.status(201).json(await uploadPhotos(db, store, scopeOf(res), id, uploadedFiles(req)));
+    })
+    .put('/order', order, async (_req, res) => {
+      const { params, body } = order.input(res);
+      res.json(await setPhotoOrder(db, scopeOf(res), params.id, body.photoIds));
+    })
+    .delete('/:photoId', remove, async (_req, res) => {
+      const { id, photoId } = remove.input(res).params;
+      res.json(await deletePhoto(db, scopeOf(res), id, photoId));
+    });
+}
+
+/**
+ * `/api/photos/:photoId` and `…/thumbnail`: the picture itself, to any member whose scope can see
+ * the work (a venue's staff see the works it holds). A photo id's content never changes, so the
+ * browser may keep it; `private` keeps shared caches out.
+ */
+export function photoFilesRouter({ db, filesDir }: AppContext) {
+  const store = photoStore(filesDir);
+  const send = async (res: Response, variant: 'original' | 'thumbnail') => {
+    const photo = await findPhotoFile(db, scopeOf(res), file.input(res).params.photoId);
+    if (!photo) throw notFound('That photo');
+    const thumbnail = variant === 'thumbnail';
+    res.type(thumbnail ? thumbnailMimeType : photo.mime_type);
+    res.set('Cache-Control', 'private, max-age=31536000, immutable');
+    res.set('ETag', `"${photo.sha256}${thumbnail ? '-thumbnail' : ''}"`);
+    const path = thumbnail ? store.thumbnailPath(photo.sha256) : store.originalPath(photo.sha256);
+    await new Promise<void>((resolve, reject) => {
+      res.sendFile(path, { etag: false, lastModified: false, cacheControl: false }, (err) => {
+        if (!err) return resolve();
+        // The error answer must not be kept like the picture would have been.
+        res.removeHeader('Cache-Control');
+        res.removeHeader('ETag');
+        const missing = (err as NodeJS.ErrnoException).code === 'ENOENT';
+        reject(missing ? notFound('That photo') : err);
+      });
+    });
+  };
+  return express
+    .Router()
+    .use(requireRole('owner', 'assistant', 'gallery'))
+    .get('/:photoId', file, async (_req, res) => send(res, 'original'))
+    .get('/:photoId/thumbnail', file, async (_req, res) => send(res, 'thumbnail'));
+}

@@ -1,0 +1,38 @@
+import Papa from 'papaparse';
+
+import { toDecimalString } from '@/shared/money';
+import { type Work } from '@/shared/schemas/work';
+import { importFieldLabels, importFields } from '@/shared/schemas/work-import';
+
+type Cell = string | number | null;
+
+const price = (money: Work['retailPrice'] | null) => (money ? toDecimalString(money) : null);
+
+/** One column per importable field (so an export imports back), then where the work is. */
+const columns: [string, (work: Work) => Cell][] = [
+  ...importFields.map((field): [string, (work: Work) => Cell] => [
+    importFieldLabels[field],
+    field === 'retailPrice' || field === 'costPrice'
+      ? (work) => price(work[field])
+      : (work) => work[field],
+  ]),
+  ['Currency', (work) => work.retailPrice.currency],
+  ['Status', (work) => work.status],
+  ['Venue', (work) => work.venue?.name ?? null],
+  ['Archived at', (work) => work.archivedAt],
+];
+
+/**
+ * The catalogue as CSV (RFC 4180 quoting by papaparse), prices in major units. Cells that a
+ * spreadsheet would run as a formula (=, +, -, @) are prefixed with an apostrophe, which the
+ * import takes off again.
+ */
+export function worksToCsv(works: readonly Work[]): string {
+  return Papa.unparse(
+    {
+      fields: columns.map(([header]) => header),
+      data: works.map((work) => columns.map(([, cell]) => cell(work) ?? '')),
+    },
+    { escapeFormulae: true, newline: '\r\n' },
+  );
+}

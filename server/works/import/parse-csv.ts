@@ -1,0 +1,77 @@
+import Papa from 'papaparse';
+
+import { type ImportField, importFieldLabels, importFields } from '@/shared/schemas/work-import';
+
+import { HttpError } from '../../http/http-error';
+
+export type CsvRecord = { rowNumber: number; cells: string[]; parseError: string | null };
+
+/** Header row and records; row numbers count the header as row 1, as a spreadsheet shows it. */
+export function parseCsv(csv: string): { columns: string[]; records: CsvRecord[] } {
+  const parsed = Papa.parse<string[]>(csv, { header: false, skipEmptyLines: false });
+  const [header = [], ...rows] = parsed.data;
+  const errorsByRow = new Map<number, string>();
+  for (const error of parsed.errors) {
+    if (error.row !== undefined) errorsByRow.set(error.row, error.message);
+  }
+  const records = rows
+    .map((cells, i) => ({
+      rowNumber: i + 2,
+      cells: cells.map(unescapeFormula),
+      parseError: errorsByRow.get(i + 1) ?? null,
+    }))
+    // Blank lines (a trailing newline, a spacer row) are not works.
+    .filter((r) => r.cells.some((c) => c.trim() !== ''));
+  return { columns: header.map((h) => h.trim()), records };
+}
+
+/** The export's guard against spreadsheet formulas ("'=…"), taken off again. */
+const unescapeFormula = (cell: string) => (/^'[=+\-@\t\r]/.test(cell) ? cell.slice(1) : cell);
+
+const normalise = (name: string) => name.toLowerCase().replace(/[^a-z0-9]/g, '');
+
+/** A few headers makers commonly use for a field, besides its name and label. */
+const aliases: Partial<Record<ImportField, string[]>> = {
+  stockNumber: ['stock', 'stockno', 'ref', 'reference', 'sku'],
+  retailPrice: ['price', 'retail'],
+  costPrice: ['cost'],
+  firingTempC: ['firingtemperature', 'firing', 'temperature'],
+  clayBody: ['clay'],
+  weightG: ['weight'],
+  heightMm: ['height'],
+  widthMm: ['width'],
+  depthMm: ['depth'],
+};
+
+/**
+ * Which column feeds each field: the mapping sent (each header must be in the file), or else
+ * headers that match a field's name, label or a usual alias, ignoring case and punctuation.
+ */
+export function resolveMapping(
+  columns: readonly string[],
+  mapping: Partial<Record<ImportField, string>> | undefined,
+): Partial<Record<ImportField, string>> {
+  if (mapping) {
+    const issues = Object.entries(mapping)
+      .filter(([, header]) => !columns.includes(header))
+      .map(([field, header]) => ({
+        path: ['mapping', field],
+        message: `There is no column called “${header}” in the file.`,
+      }));
+    if (issues.length > 0) {
+      throw new HttpError('invalid_request', 'Some fields need attention.', issues);
+    }
+    return mapping;
+  }
+  const resolved: Partial<Record<ImportField, string>> = {};
+  const used = new Set<string>();
+  for (const field of importFields) {
+    const names = [field, importFieldLabels[field], ...(aliases[field] ?? [])].map(normalise);
+    const header = columns.find((c) => !used.has(c) && names.includes(normalise(c)));
+    if (header !== undefined) {
+      resolved[field] = header;
+      used.add(header);
+    }
+  }
+  return resolved;
+}

@@ -1,0 +1,31 @@
+import { isoDateInTimeZone } from '@/shared/money';
+import { counterOf, formatStockNumber, stockNumberGlob } from '@/shared/works/stock-number';
+
+import { type Scope } from '../access/viewer';
+import { type Db } from '../db/database';
+import { type Studio } from '../studio/studio.repository';
+import { listStockNumbersLike } from './works.repository';
+
+/**
+ * Hands out stock numbers from the studio's pattern for this year (in the studio's time zone),
+ * one past the highest already used, including `alsoTaken` (numbers about to be inserted).
+ */
+export async function stockNumberAllocator(
+  db: Db,
+  scope: Scope,
+  studio: Pick<Studio, 'stock_number_pattern' | 'time_zone'>,
+  alsoTaken: Iterable<string> = [],
+  now = new Date(),
+) {
+  const pattern = studio.stock_number_pattern;
+  const year = Number(isoDateInTimeZone(now, studio.time_zone).slice(0, 4));
+  const existing = await listStockNumbersLike(db, scope, stockNumberGlob(pattern, year));
+  let highest = 0;
+  for (const stockNumber of [...existing, ...alsoTaken]) {
+    highest = Math.max(highest, counterOf(pattern, year, stockNumber) ?? 0);
+  }
+  return {
+    peek: () => formatStockNumber(pattern, year, highest + 1),
+    next: () => formatStockNumber(pattern, year, ++highest),
+  };
+}

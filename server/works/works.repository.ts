@@ -1,0 +1,290 @@
+import { type Expression, sql, type SqlBool } from 'kysely';
+
+import { type WorkSort, type WorkStatus, workStatuses } from '@/shared/schemas/work';
+
+import { scoped } from '../access/scoped';
+import { type Scope } from '../access/viewer';
+import { type Db } from '../db/database';
+import { type NewWorkRow } from '../db/schema/works';
+import { latestLineId, statusFromLatestLine } from './work-status';
+import { toPhoto, type toWorkColumns, type WorkListRow } from './works.mapper';
+
+export type WorkFilter = {
+  search?: string;
+  status?: WorkStatus;
+  series?: string;
+  category?: string;
+  venueId?: number;
+  archived: 'exclude' | 'include' | 'only';
+};
+
+/**
+ * The studio's works, each joined to its latest consignment line and, while that line is out,
+ * to the venue holding it: status and place are derived here, never stored.
+ */
+function worksWithPlace(db: Db, scope: Scope) {
+  return scoped
+    .works(db, scope)
+    .leftJoin('consignment_lines as latest', (join) =>
+      join.onRef('latest.work_id', '=', 'works.id').on('latest.id', '=', latestLineId),
+    )
+    .leftJoin('consignments as placed', (join) =>
+      join.onRef('placed.id', '=', 'latest.consignment_id').on('latest.state', '=', 'consigned'),
+    )
+    .leftJoin('venues as place_venue', 'place_venue.id', 'placed.venue_id');
+}
+
+type WorksWithPlace = ReturnType<typeof worksWithPlace>;
+
+const status = statusFromLatestLine(sql.ref('latest.state'));
+
+/** Statuses sort in the order a work moves through them, not alphabetically. */
+const statusRank = sql<number>`case ${status} ${sql.join(
+  workStatuses.map((s, i) => sql`when ${sql.lit(s)} then ${sql.lit(i)}`),
+  sql` `,
+)} end`;
+
+/** `%` and `_` in what a maker types are letters, not wildcards. */
+const likeTerm = (word: string) => `%${word.replace(/[\\%_]/g, '\\$&')}%`;
+
+const searchColumns = [
+  'works.stock_number',
+  'works.title',
+  'works.series',
+  'works.category',
+  'works.clay_body',
+  'works.glaze',
+] as const;
+
+function filtered(query: WorksWithPlace, filter: WorkFilter): WorksWithPlace {
+  let q = query;
+  if (filter.archived === 'exclude') q = q.where('works.archived_at', 'is', null);
+  if (filter.archived === 'only') q = q.where('works.archived_at', 'is not', null);
+  if (filter.status) q = q.where(status, '=', filter.status);
+  if (filter.series) q = q.where('works.series', '=', filter.series);
+  if (filter.category) q = q.where('works.category', '=', filter.category);
+  if (filter.venueId) q = q.where('placed.venue_id', '=', filter.venueId);
+  // Every word must appear in one of the text columns.
+  for (const word of (filter.search ?? '').split(/\s+/).filter(Boolean)) {
+    const pattern = likeTerm(word);
+    q = q.where((eb) =>
+      eb.or(
+        searchColumns.map(
+          (column) => sql<SqlBool>`${sql.ref(column)} like ${pattern} escape '\\'`,
+        ) as Expression<SqlBool>[],
+      ),
+    );
+  }
+  return q;
+}
+
+function sorted(query: WorksWithPlace, sort: WorkSort): WorksWithPlace {
+  const direction = sort.startsWith('-') ? 'desc' : 'asc';
+  const key = sort.replace(/^-/, '') as 'stockNumber' | 'title' | 'year' | 'price' | 'status';
+  let q = query;
+  if (key === 'title') q = q.orderBy(sql`works.title collate nocase`, direction);
+  if (key === 'year') q = q.orderBy('works.year', (o) => o[direction]().nullsLast());
+  if (key === 'price') q = q.orderBy('works.retail_price', direction);
+  if (key === 'status') q = q.orderBy(statusRank, direction);
+  // The stock number breaks ties, then the id, so pages never overlap.
+  return q
+    .orderBy('works.stock_number', key === 'stockNumber' ? direction : 'asc')
+    .orderBy('works.id');
+}
+
+function selectWork(query: WorksWithPlace) {
+  return query.select([
+    'works.id',
+    'works.stock_number',
+    'works.title',
+    'works.year',
+    'works.series',
+    'works.category',
+    'works.clay_body',
+    'works.glaze',
+    'works.firing_temp_c',
+    'works.atmosphere',
+    'works.kiln',
+    'works.height_mm',
+    'works.width_mm',
+    'works.depth_mm',
+    'works.weight_g',
+    'works.retail_price',
+    'works.currency',
+    'works.cost_price',
+    'works.food_use',
+    'works.care_notes',
+    'works.notes',
+    'works.archived_at',
+    'works.created_at',
+    'works.updated_at',
+    status.as('status'),
+    'placed.venue_id as venue_id',
+    'place_venue.name as venue_name',
+  ]);
+}
+
+export async function listWorkRows(
+  db: Db,
+  scope: Scope,
+  filter: WorkFilter,
+  sort: WorkSort,
+  page?: { page: number; pageSize: number },
+): Promise<WorkListRow[]> {
+  let q = selectWork(sorted(filtered(worksWithPlace(db, scope), filter), sort));
+  if (page) q = q.limit(page.pageSize).offset((page.page - 1) * page.pageSize);
+  return q.execute();
+}
+
+export async function countWorks(db: Db, scope: Scope, filter: WorkFilter): Promise<number> {
+  const row = await filtered(worksWithPlace(db, scope), filter)
+    .select((eb) => eb.fn.countAll<number>().as('n'))
+    .executeTakeFirstOrThrow();
+  return Number(row.n);
+}
+
+export async function findWorkRow(
+  db: Db,
+  scope: Scope,
+  id: number,
+): Promise<WorkListRow | undefined> {
+  return selectWork(worksWithPlace(db, scope)).where('works.id', '=', id).executeTakeFirst();
+}
+
+/** Photos of the given works, cover first, grouped by work. */
+export async function listPhotosOf(db: Db, scope: Scope, workIds: readonly number[]) {
+  const byWork = new Map<number, ReturnType<typeof toPhoto>[]>();
+  if (workIds.length === 0) return byWork;
+  const rows = await scoped
+    .workPhotos(db, scope)
+    .where('work_photos.work_id', 'in', workIds)
+    .select([
+      'work_photos.id',
+      'work_photos.work_id',
+      'work_photos.position',
+      'files.width_px',
+      'files.height_px',
+    ])
+    .orderBy('work_photos.work_id')
+    .orderBy('work_photos.position')
+    .execute();
+  for (const row of rows) {
+    const list = byWork.get(row.work_id) ?? [];
+    list.push(toPhoto(row));
+    byWork.set(row.work_id, list);
+  }
+  return byWork;
+}
+
+export async function listFacets(db: Db, scope: Scope) {
+  const distinct = async (column: 'works.series' | 'works.category') => {
+    const rows = await scoped
+      .works(db, scope)
+      .select(`${column} as value`)
+      .distinct()
+      .where(column, 'is not', null)
+      .where('works.archived_at', 'is', null)
+      .orderBy(sql`${sql.ref(column)} collate nocase`)
+      .execute();
+    return rows.map((r) => r.value).filter((v): v is string => v !== null);
+  };
+  const venues = await scoped
+    .venues(db, scope)
+    .select(['venues.id', 'venues.name'])
+    .where('venues.archived_at', 'is', null)
+    .orderBy(sql`venues.name collate nocase`)
+    .execute();
+  return {
+    series: await distinct('works.series'),
+    categories: await distinct('works.category'),
+    venues,
+  };
+}
+
+/** Stock numbers of the studio that match an SQLite GLOB (see `stockNumberGlob`). */
+export async function listStockNumbersLike(db: Db, scope: Scope, glob: string) {
+  const rows = await scoped
+    .works(db, scope)
+    .select('works.stock_number')
+    .where(sql<SqlBool>`works.stock_number glob ${glob}`)
+    .execute();
+  return rows.map((r) => r.stock_number);
+}
+
+/** Which of these stock numbers the studio already uses (another work's, when `exceptId`). */
+export async function stockNumbersTaken(
+  db: Db,
+  scope: Scope,
+  stockNumbers: readonly string[],
+  exceptId?: number,
+): Promise<Set<string>> {
+  const taken = new Set<string>();
+  // SQLite caps bound parameters per statement, so ask in slices.
+  for (let i = 0; i < stockNumbers.length; i += 500) {
+    let q = scoped
+      .works(db, scope)
+      .select('works.stock_number')
+      .where('works.stock_number', 'in', stockNumbers.slice(i, i + 500));
+    if (exceptId !== undefined) q = q.where('works.id', '!=', exceptId);
+    for (const row of await q.execute()) taken.add(row.stock_number);
+  }
+  return taken;
+}
+
+export async function insertWorks(db: Db, rows: readonly NewWorkRow[]): Promise<number[]> {
+  const ids: number[] = [];
+  for (let i = 0; i < rows.length; i += 200) {
+    const inserted = await db
+      .insertInto('works')
+      .values(rows.slice(i, i + 200))
+      .returning('id')
+      .execute();
+    ids.push(...inserted.map((r) => r.id));
+  }
+  return ids;
+}
+
+export async function updateWorkColumns(
+  db: Db,
+  scope: Scope,
+  id: number,
+  columns: ReturnType<typeof toWorkColumns> & { archived_at?: string | null },
+): Promise<void> {
+  await db
+    .updateTable('works')
+    .set({ ...columns, updated_at: new Date().toISOString() })
+    .where('works.studio_id', '=', scope.studioId)
+    .where('works.id', '=', id)
+    .execute();
+}
+
+/** Whether the work has ever been on a consignment line or had its condition reported. */
+export async function workHasRecord(db: Db, scope: Scope, id: number) {
+  const line = await scoped
+    .consignmentLines(db, scope)
+    .select('consignment_lines.id')
+    .where('consignment_lines.work_id', '=', id)
+    .executeTakeFirst();
+  const report = await scoped
+    .conditionReports(db, scope)
+    .select('condition_reports.id')
+    .where('condition_reports.work_id', '=', id)
+    .executeTakeFirst();
+  return { consigned: line !== undefined, reported: report !== undefined };
+}
+
+export async function deleteWorkRow(db: Db, scope: Scope, id: number): Promise<void> {
+  await db
+    .deleteFrom('work_photos')
+    .where(
+      'work_photos.work_id',
+      'in',
+      scoped.works(db, scope).select('works.id').where('works.id', '=', id),
+    )
+    .execute();
+  await db
+    .deleteFrom('works')
+    .where('works.studio_id', '=', scope.studioId)
+    .where('works.id', '=', id)
+    .execute();
+}

@@ -1,0 +1,168 @@
+import {
+  type Work,
+  type WorkCreateParsed,
+  type WorkList,
+  type WorkSort,
+  type WorkUpdateParsed,
+} from '@/shared/schemas/work';
+
+import { type Scope } from '../access/viewer';
+import { writeAudit } from '../audit/audit-log.repository';
+import { type Db } from '../db/database';
+import { HttpError, notFound } from '../http/http-error';
+import { getStudio } from '../studio/studio.repository';
+import { stockNumberAllocator } from './stock-numbers';
+import { toNewWorkRow, toWork, toWorkColumns } from './works.mapper';
+import {
+  countWorks,
+  deleteWorkRow,
+  findWorkRow,
+  insertWorks,
+  listPhotosOf,
+  listWorkRows,
+  stockNumbersTaken,
+  updateWorkColumns,
+  type WorkFilter,
+  workHasRecord,
+} from './works.repository';
+
+export function stockNumberConflict(stockNumber: string): HttpError {
+  const message = `The stock number ${stockNumber} is already used by another work in this studio.`;
+  return new HttpError('conflict', message, [{ path: ['stockNumber'], message }]);
+}
+
+/** SQLite's answer when the unique (studio, stock number) index refuses a row. */
+const isUniqueViolation = (err: unknown) =>
+  (err as { code?: unknown } | null)?.code === 'SQLITE_CONSTRAINT_UNIQUE';
+
+export async function listWorks(
+  db: Db,
+  scope: Scope,
+  query: WorkFilter & { sort: WorkSort; page: number; pageSize: number },
+): Promise<WorkList> {
+  const [rows, total] = await Promise.all([
+    listWorkRows(db, scope, query, query.sort, query),
+    countWorks(db, scope, query),
+  ]);
+  const photos = await listPhotosOf(
+    db,
+    scope,
+    rows.map((r) => r.id),
+  );
+  return { items: rows.map((r) => toWork(r, photos.get(r.id) ?? [])), total };
+}
+
+/** Every work the filter selects, in order, without photos: what the CSV export writes. */
+export async function listAllWorks(
+  db: Db,
+  scope: Scope,
+  query: WorkFilter & { sort: WorkSort },
+): Promise<Work[]> {
+  const rows = await listWorkRows(db, scope, query, query.sort);
+  return rows.map((r) => toWork(r, []));
+}
+
+export async function getWork(db: Db, scope: Scope, id: number): Promise<Work> {
+  const row = await findWorkRow(db, scope, id);
+  if (!row) throw notFound('That work');
+  const photos = await listPhotosOf(db, scope, [id]);
+  return toWork(row, photos.get(id) ?? []);
+}
+
+/** A new work; without a stock number it gets the next one from the studio's pattern. */
+export async function createWork(db: Db, scope: Scope, input: WorkCreateParsed): Promise<Work> {
+  const id = await db.transaction().execute(async (trx) => {
+    let stockNumber = input.stockNumber;
+    if (stockNumber === undefined) {
+      stockNumber = (await stockNumberAllocator(trx, scope, await getStudio(trx, scope))).next();
+    } else if ((await stockNumbersTaken(trx, scope, [stockNumber])).size > 0) {
+      throw stockNumberConflict(stockNumber);
+    }
+    try {
+      const [inserted] = await insertWorks(trx, [toNewWorkRow(input, scope.studioId, stockNumber)]);
+      return inserted!;
+    } catch (err) {
+      if (isUniqueViolation(err)) throw stockNumberConflict(stockNumber);
+      throw err;
+    }
+  });
+  return getWork(db, scope, id);
+}
+
+/** Changes the fields sent; a change of retail price is written to the audit log. */
+export async function updateWork(
+  db: Db,
+  scope: Scope,
+  id: number,
+  input: WorkUpdateParsed,
+): Promise<Work> {
+  await db.transaction().execute(async (trx) => {
+    const before = await findWorkRow(trx, scope, id);
+    if (!before) throw notFound('That work');
+    const currency = input.retailPrice?.currency ?? before.currency;
+    if (input.costPrice && input.costPrice.currency !== currency) {
+      throw new HttpError('invalid_request', 'Some fields need attention.', [
+        {
+          path: ['costPrice', 'currency'],
+          message: 'Enter the cost in the same currency as the retail price.',
+        },
+      ]);
+    }
+    if (
+      input.stockNumber !== undefined &&
+      (await stockNumbersTaken(trx, scope, [input.stockNumber], id)).size > 0
+    ) {
+      throw stockNumberConflict(input.stockNumber);
+    }
+    try {
+      await updateWorkColumns(trx, scope, id, toWorkColumns(input));
+    } catch (err) {
+      if (isUniqueViolation(err)) throw stockNumberConflict(input.stockNumber ?? '');
+      throw err;
+    }
+    const price = input.retailPrice;
+    if (price && (price.amount !== before.retail_price || price.currency !== before.currency)) {
+      await writeAudit(trx, scope, {
+        action: 'work.price-changed',
+        entity: 'work',
+        entityId: id,
+        before: { retailPrice: { amount: before.retail_price, currency: before.currency } },
+        after: { retailPrice: price },
+      });
+    }
+  });
+  return getWork(db, scope, id);
+}
+
+export async function setArchived(
+  db: Db,
+  scope: Scope,
+  id: number,
+  archived: boolean,
+): Promise<Work> {
+  const work = await findWorkRow(db, scope, id);
+  if (!work) throw notFound('That work');
+  if ((work.archived_at !== null) !== archived) {
+    await updateWorkColumns(db, scope, id, {
+      archived_at: archived ? new Date().toISOString() : null,
+    });
+  }
+  return getWork(db, scope, id);
+}
+
+/** Deletes a work that has no history; one that has been consigned is kept and can be archived. */
+export async function deleteWork(db: Db, scope: Scope, id: number): Promise<void> {
+  await db.transaction().execute(async (trx) => {
+    const work = await findWorkRow(trx, scope, id);
+    if (!work) throw notFound('That work');
+    const record = await workHasRecord(trx, scope, id);
+    if (record.consigned || record.reported) {
+      throw new HttpError(
+        'conflict',
+        `${work.stock_number} has been ${record.consigned ? 'on a consignment' : 'condition-checked'}, ` +
+          'so it stays in the catalogue for the record. Archive it instead to hide it from lists.',
+      );
+    }
+    await deleteWorkRow(trx, scope, id);
+  });
+}
