@@ -18,7 +18,10 @@ const mimeTypes: Record<string, string> = {
 };
 
 export const thumbnailSize = 480;
-export const thumbnailMimeType = 'image/webp';
+/** The longest side of the picture the app shows; originals are kept but never served. */
+export const displaySize = 2048;
+/** Both renditions are WebP, written by sharp without the original's metadata (EXIF, GPS). */
+export const renditionMimeType = 'image/webp';
 
 export type CheckedImage = {
   buffer: Buffer;
@@ -27,6 +30,7 @@ export type CheckedImage = {
   widthPx: number;
   heightPx: number;
   thumbnail: Buffer;
+  display: Buffer;
 };
 
 const notAnImage = (name: string) =>
@@ -43,12 +47,18 @@ const notAnImage = (name: string) =>
 export async function checkImage(buffer: Buffer, name: string): Promise<CheckedImage> {
   let metadata: Metadata;
   let thumbnail: Buffer;
+  let display: Buffer;
   try {
     metadata = await sharp(buffer).metadata();
     thumbnail = await sharp(buffer, { failOn: 'error' })
       .rotate()
       .resize(thumbnailSize, thumbnailSize, { fit: 'cover' })
       .webp({ quality: 80 })
+      .toBuffer();
+    display = await sharp(buffer, { failOn: 'error' })
+      .rotate()
+      .resize(displaySize, displaySize, { fit: 'inside', withoutEnlargement: true })
+      .webp({ quality: 85 })
       .toBuffer();
   } catch {
     throw notAnImage(name);
@@ -66,6 +76,7 @@ export async function checkImage(buffer: Buffer, name: string): Promise<CheckedI
     widthPx: turned ? metadata.height : metadata.width,
     heightPx: turned ? metadata.width : metadata.height,
     thumbnail,
+    display,
   };
 }
 
@@ -84,8 +95,9 @@ async function writeOnce(file: string, data: Buffer): Promise<void> {
 }
 
 /**
- * Originals and thumbnails on disk, named by the SHA-256 of the original's content, so the same
- * picture is stored once however often it is uploaded.
+ * Originals and their renditions on disk, named by the SHA-256 of the original's content, so the
+ * same picture is stored once however often it is uploaded. Only the renditions are served: a
+ * phone's original can carry where it was taken, and a venue's staff see these pictures too.
  */
 export function photoStore(filesDir: string) {
   const root = path.resolve(filesDir);
@@ -93,13 +105,17 @@ export function photoStore(filesDir: string) {
   const originalPath = (sha256: string) => path.join(root, 'originals', shard(sha256), sha256);
   const thumbnailPath = (sha256: string) =>
     path.join(root, 'thumbnails', shard(sha256), `${sha256}-${thumbnailSize}.webp`);
+  const displayPath = (sha256: string) =>
+    path.join(root, 'display', shard(sha256), `${sha256}-${displaySize}.webp`);
 
   return {
     originalPath,
     thumbnailPath,
+    displayPath,
     async save(image: CheckedImage): Promise<void> {
       await writeOnce(originalPath(image.sha256), image.buffer);
       await writeOnce(thumbnailPath(image.sha256), image.thumbnail);
+      await writeOnce(displayPath(image.sha256), image.display);
     },
   };
 }

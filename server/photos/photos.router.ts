@@ -11,7 +11,7 @@ import { requireRole, scopeOf } from '../access/authenticate';
 import { type AppContext } from '../context';
 import { notFound } from '../http/http-error';
 import { validate } from '../http/validate';
-import { photoStore, thumbnailMimeType } from './photo-store';
+import { photoStore, renditionMimeType } from './photo-store';
 import { findPhotoFile } from './photos.repository';
 import { deletePhoto, setPhotoOrder, uploadPhotos } from './photos.service';
 import { receivePhotos, uploadedFiles } from './upload';
@@ -42,20 +42,20 @@ export function workPhotosRouter({ db, filesDir }: AppContext) {
 }
 
 /**
- * `/api/photos/:photoId` and `…/thumbnail`: the picture itself, to any member whose scope can see
+ * `/api/photos/:photoId` and `…/thumbnail`: the picture as shown, to any member whose scope can see
  * the work (a venue's staff see the works it holds). A photo id's content never changes, so the
  * browser may keep it; `private` keeps shared caches out.
  */
 export function photoFilesRouter({ db, filesDir }: AppContext) {
   const store = photoStore(filesDir);
-  const send = async (res: Response, variant: 'original' | 'thumbnail') => {
+  const send = async (res: Response, variant: 'display' | 'thumbnail') => {
     const photo = await findPhotoFile(db, scopeOf(res), file.input(res).params.photoId);
     if (!photo) throw notFound('That photo');
     const thumbnail = variant === 'thumbnail';
-    res.type(thumbnail ? thumbnailMimeType : photo.mime_type);
+    res.type(renditionMimeType);
     res.set('Cache-Control', 'private, max-age=31536000, immutable');
-    res.set('ETag', `"${photo.sha256}${thumbnail ? '-thumbnail' : ''}"`);
-    const path = thumbnail ? store.thumbnailPath(photo.sha256) : store.originalPath(photo.sha256);
+    res.set('ETag', `"${photo.sha256}-${variant}"`);
+    const path = thumbnail ? store.thumbnailPath(photo.sha256) : store.displayPath(photo.sha256);
     await new Promise<void>((resolve, reject) => {
       res.sendFile(path, { etag: false, lastModified: false, cacheControl: false }, (err) => {
         if (!err) return resolve();
@@ -70,6 +70,6 @@ export function photoFilesRouter({ db, filesDir }: AppContext) {
   return express
     .Router()
     .use(requireRole('owner', 'assistant', 'gallery'))
-    .get('/:photoId', file, async (_req, res) => send(res, 'original'))
+    .get('/:photoId', file, async (_req, res) => send(res, 'display'))
     .get('/:photoId/thumbnail', file, async (_req, res) => send(res, 'thumbnail'));
 }

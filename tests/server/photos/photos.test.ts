@@ -103,13 +103,15 @@ describe('POST /api/works/:id/photos', () => {
     );
     expect(fs.readFileSync(originals.find((p) => p.endsWith(sha256(red)))!)).toEqual(red);
 
+    // What is served is a rendition, read back with sharp: the picture at its own size.
     const original = await request(f.app)
       .get(first.url)
       .set(await as(f, 'assistant'));
     expect(original.status).toBe(200);
-    expect(original.headers['content-type']).toBe('image/jpeg');
+    expect(original.headers['content-type']).toBe('image/webp');
     expect(original.headers['cache-control']).toBe('private, max-age=31536000, immutable');
-    expect(Buffer.from(original.body)).toEqual(red);
+    const shown = await sharp(original.body as Buffer).metadata();
+    expect([shown.format, shown.width, shown.height]).toEqual(['webp', 800, 600]);
 
     // Checked with sharp, the reference decoder: a 480 px square WebP.
     const thumb = await request(f.app)
@@ -321,6 +323,30 @@ describe('DELETE /api/works/:id/photos/:photoId', () => {
 });
 
 describe('GET /api/photos/:photoId', () => {
+  it('never serves the metadata a camera wrote, such as where the picture was taken', async () => {
+    const f = await studioFixture();
+    const work = await insertWork(f.db, f.studioA, 'A-9');
+    // sharp writes the EXIF block and reads it back: the reference for what a file carries.
+    const tagged = await sharp({
+      create: { width: 640, height: 480, channels: 3, background: '#777' },
+    })
+      .jpeg()
+      .withExif({ IFD0: { Artist: 'Studio camera', ImageDescription: 'Taken at home' } })
+      .toBuffer();
+    expect((await sharp(tagged).metadata()).exif).toBeDefined();
+    const res = await upload(f, work, [{ data: tagged, name: 'tagged.jpg' }]);
+    expect(res.status).toBe(201);
+    for (const url of [res.body[0].url, res.body[0].thumbnailUrl]) {
+      const served = await request(f.app)
+        .get(url)
+        .set(await as(f));
+      expect(served.status).toBe(200);
+      const meta = await sharp(served.body as Buffer).metadata();
+      expect(meta.exif).toBeUndefined();
+      expect(Buffer.from(served.body).includes('Taken at home')).toBe(false);
+    }
+  });
+
   it('serves a venue’s staff the photos of works their venue holds, and no others', async () => {
     const f = await studioFixture();
     const { work, ids } = await workWithPhotos(f);
@@ -329,7 +355,7 @@ describe('GET /api/photos/:photoId', () => {
     const cookie = await as(f, 'gallery');
     const shown = await request(f.app).get(`/api/photos/${ids[0]}`).set(cookie);
     expect(shown.status).toBe(200);
-    expect(shown.headers['content-type']).toBe('image/jpeg');
+    expect(shown.headers['content-type']).toBe('image/webp');
     const hidden = await request(f.app).get(`/api/photos/${kept[0]}`).set(cookie);
     expect(hidden.status).toBe(404);
     expect(hidden.body).toEqual({
