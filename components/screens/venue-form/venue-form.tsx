@@ -2,12 +2,11 @@ import { type ReactNode } from 'react';
 import { type Control, Controller, type Resolver, useForm, useWatch } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 
-import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { Choice, type ChoiceOption } from '@/components/ui/choice';
 import { serverErrors } from '@/components/ui/form-errors';
+import { FormFooter } from '@/components/ui/form-footer';
 import { MoneyField } from '@/components/ui/money-field';
-import { Notice } from '@/components/ui/notice';
 import { NumberField } from '@/components/ui/number-field';
 import { Heading, Text } from '@/components/ui/text';
 import { TextField, type TextFieldProps } from '@/components/ui/text-field';
@@ -144,8 +143,6 @@ export function VenueForm<Parsed extends object>({
       if (message !== null) setError('root.server', { message });
     }
   });
-  const formError = formState.errors.root?.server?.message;
-  const fieldCount = Object.keys(formState.errors).filter((key) => key !== 'root').length;
 
   const termsFields = (
     <Card style={styles.section}>
@@ -297,22 +294,14 @@ export function VenueForm<Parsed extends object>({
         <Input control={any} name="notes" label="Notes (optional)" multiline />
       </Card>
 
-      {formError ? <Notice testID="venue-form-error" message={formError} /> : null}
-      {!formError && fieldCount > 0 ? (
-        <Notice
-          testID="venue-form-fields"
-          message={`${fieldCount === 1 ? 'One field needs' : `${fieldCount} fields need`} another look; see the messages by ${fieldCount === 1 ? 'it' : 'them'}.`}
-        />
-      ) : null}
-      <View style={styles.submit}>
-        <Button
-          testID="venue-submit"
-          label={submitLabel}
-          busyLabel="Saving…"
-          busy={formState.isSubmitting}
-          onPress={submit}
-        />
-      </View>
+      <FormFooter
+        name="venue"
+        errors={formState.errors}
+        submitLabel={submitLabel}
+        busyLabel="Saving…"
+        busy={formState.isSubmitting}
+        onSubmit={submit}
+      />
     </View>
   );
 }
@@ -327,5 +316,4 @@ const styles = StyleSheet.create({
   termsFields: { flex: 1 },
   preview: {},
   previewWide: { width: 320 },
-  submit: { alignSelf: 'flex-start' },
 });

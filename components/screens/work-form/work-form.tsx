@@ -9,12 +9,11 @@ import {
 } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 
-import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { Choice } from '@/components/ui/choice';
 import { serverErrors } from '@/components/ui/form-errors';
+import { FormFooter } from '@/components/ui/form-footer';
 import { MoneyField } from '@/components/ui/money-field';
-import { Notice } from '@/components/ui/notice';
 import { NumberField } from '@/components/ui/number-field';
 import { Heading, Text } from '@/components/ui/text';
 import { TextField } from '@/components/ui/text-field';
@@ -170,8 +169,6 @@ export function WorkForm<Parsed extends object>({
     }
   };
   const submit = handleSubmit(save);
-  const formError = formState.errors.root?.server?.message;
-  const fieldCount = Object.keys(formState.errors).filter((key) => key !== 'root').length;
 
   return (
     <View style={styles.form} role="form" aria-label={mode === 'create' ? 'New work' : 'Edit work'}>
@@ -323,23 +320,16 @@ export function WorkForm<Parsed extends object>({
 
       {photos}
 
-      {formError ? <Notice testID="work-form-error" message={formError} /> : null}
-      {!formError && fieldCount > 0 ? (
-        <Notice
-          testID="work-form-fields"
-          message={`${fieldCount === 1 ? 'One field needs' : `${fieldCount} fields need`} another look; see the messages by ${fieldCount === 1 ? 'it' : 'them'}.`}
-        />
-      ) : null}
-      {afterNotice}
-      <View style={styles.submit}>
-        <Button
-          testID="work-submit"
-          label={submitLabel}
-          busyLabel={busyLabel}
-          busy={formState.isSubmitting}
-          onPress={submit}
-        />
-      </View>
+      <FormFooter
+        name="work"
+        errors={formState.errors}
+        submitLabel={submitLabel}
+        busyLabel={busyLabel}
+        busy={formState.isSubmitting}
+        onSubmit={submit}
+      >
+        {afterNotice}
+      </FormFooter>
     </View>
   );
 }
@@ -349,5 +339,4 @@ const styles = StyleSheet.create({
   section: { gap: spacing.md },
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.md },
   cell: { flexGrow: 1, minWidth: 120 },
-  submit: { alignSelf: 'flex-start' },
 });
