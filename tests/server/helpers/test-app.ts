@@ -12,6 +12,7 @@ import { openDatabase } from '@/server/db/database';
 import { migrateToLatest } from '@/server/db/migrate';
 import { addMembership } from '@/server/memberships/memberships.repository';
 import { type Role } from '@/shared/schemas/membership';
+import { defaultTerms } from '@/shared/schemas/terms';
 
 type App = Parameters<typeof request>[0];
 
@@ -38,18 +39,7 @@ export async function createTestApp(
 
 type TestDb = Awaited<ReturnType<typeof createTestApp>>['db'];
 
-const terms = JSON.stringify({
-  currency: 'GBP',
-  commissionRateBp: 4000,
-  vatRateBp: 2000,
-  venueRole: 'agent',
-  commissionVat: 'none',
-  makerVatRegistered: false,
-  discountRule: 'shared',
-  insuranceBasis: 'maker-net',
-  insuredBy: 'venue',
-  paymentTerms: { days: 30, from: 'month-end' },
-});
+const terms = JSON.stringify(defaultTerms);
 
 export async function addStudio(db: TestDb, name: string): Promise<number> {
   const row = await db
