@@ -15,6 +15,8 @@ export function readConfig(env: NodeJS.ProcessEnv = process.env) {
     /** Set by `npm run dev`: the Expo dev server that non-API requests are passed to. */
     webDevUrl: env.SAGGAR_WEB_DEV_URL ?? null,
     trustedOrigins: (env.SAGGAR_TRUSTED_ORIGINS ?? '').split(',').filter(Boolean),
+    /** The address people use, e.g. https://saggar.example: HTTPS makes the cookie Secure. */
+    publicUrl: env.SAGGAR_PUBLIC_URL ?? null,
     authSecret: env.SAGGAR_AUTH_SECRET ?? localSecret(dataDir),
     logLevel: env.LOG_LEVEL ?? 'info',
   };

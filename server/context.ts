@@ -20,10 +20,11 @@ export type AppContext = {
 
 export type ContextOptions = Omit<AppContext, 'auth' | 'signInLimit'> &
   Pick<AuthOptions, 'secret'> &
+  Partial<Pick<AuthOptions, 'publicUrl'>> &
   Partial<Pick<AppContext, 'signInLimit'>>;
 
 export function createContext(options: ContextOptions): AppContext {
-  const { secret, ...rest } = options;
+  const { secret, publicUrl = null, ...rest } = options;
   return {
     signInLimit: { max: 10, windowMs: 15 * 60 * 1000 },
     ...rest,
@@ -31,6 +32,7 @@ export function createContext(options: ContextOptions): AppContext {
       db: options.db,
       logger: options.logger,
       secret,
+      publicUrl,
       trustedOrigins: options.trustedOrigins,
     }),
   };

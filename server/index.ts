@@ -20,6 +20,7 @@ async function main() {
     db,
     logger,
     secret: config.authSecret,
+    publicUrl: config.publicUrl,
     web: config.webDevUrl ? await devWebProxy(config.webDevUrl) : webApp(config.webRoot),
     trustedOrigins: config.trustedOrigins,
     filesDir: config.filesDir,

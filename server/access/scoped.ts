@@ -1,9 +1,23 @@
+import { type ConsignmentState } from '@/shared/schemas/consignment';
+
 import { type Db } from '../db/database';
 import { type Scope } from './viewer';
 
+/** A venue sees a consignment once its terms are agreed, not while the maker is drafting it. */
+export const visibleToVenue: readonly ConsignmentState[] = [
+  'agreed',
+  'dispatched',
+  'on-show',
+  'closed',
+  'settled',
+];
+
 function scopedConsignments(db: Db, scope: Scope) {
   const q = db.selectFrom('consignments').where('consignments.studio_id', '=', scope.studioId);
-  return scope.venueId === null ? q : q.where('consignments.venue_id', '=', scope.venueId);
+  if (scope.venueId === null) return q;
+  return q
+    .where('consignments.venue_id', '=', scope.venueId)
+    .where('consignments.state', 'in', visibleToVenue);
 }
 
 function scopedWorks(db: Db, scope: Scope) {
@@ -16,7 +30,8 @@ function scopedWorks(db: Db, scope: Scope) {
         .innerJoin('consignments', 'consignments.id', 'consignment_lines.consignment_id')
         .select('consignment_lines.id')
         .whereRef('consignment_lines.work_id', '=', 'works.id')
-        .where('consignments.venue_id', '=', venueId),
+        .where('consignments.venue_id', '=', venueId)
+        .where('consignments.state', 'in', visibleToVenue),
     ),
   );
 }
@@ -82,7 +97,8 @@ export const scoped = {
           .innerJoin('consignments', 'consignments.id', 'consignment_lines.consignment_id')
           .select('consignment_lines.id')
           .whereRef('consignment_lines.id', '=', 'condition_reports.consignment_line_id')
-          .where('consignments.venue_id', '=', venueId),
+          .where('consignments.venue_id', '=', venueId)
+          .where('consignments.state', 'in', visibleToVenue),
       ),
     );
   },

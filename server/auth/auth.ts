@@ -12,6 +12,8 @@ export type AuthOptions = {
   db: Db;
   logger: Logger;
   secret: string;
+  /** Where people reach the app, e.g. https://saggar.example; null derives it per request. */
+  publicUrl: string | null;
   /** Origins besides the request's own that may call the auth endpoints (a dev server). */
   trustedOrigins: readonly string[];
 };
@@ -40,7 +42,9 @@ function normalised(error: APIError): APIError {
   const message =
     code === 'invalid_credentials'
       ? 'That e-mail address and password do not match an account.'
-      : (body?.message ?? 'The request could not be completed.');
+      : code === 'internal'
+        ? 'Something went wrong on our side. Try again.'
+        : (body?.message ?? 'The request could not be completed.');
   return apiError(status, { error: { code, message } });
 }
 
@@ -49,11 +53,13 @@ export function createAuth({
   db,
   logger,
   secret,
+  publicUrl,
   trustedOrigins,
 }: AuthOptions): Auth<BetterAuthOptions> {
   const timestamps = { createdAt: 'created_at', updatedAt: 'updated_at' };
   return betterAuth({
     secret,
+    ...(publicUrl ? { baseURL: publicUrl } : {}),
     trustedOrigins: [...trustedOrigins],
     database: { db, type: 'sqlite' },
     // Accounts are made by the studio (demo seed, invitations), never by public sign-up.
@@ -62,7 +68,12 @@ export function createAuth({
     rateLimit: { enabled: false },
     telemetry: { enabled: false },
     logger: { log: (level, message) => logger[level](message) },
-    advanced: { cookiePrefix: 'saggar', database: { generateId: () => crypto.randomUUID() } },
+    advanced: {
+      cookiePrefix: 'saggar',
+      // Served over HTTPS, the session cookie must never travel over plain HTTP.
+      useSecureCookies: publicUrl?.startsWith('https://') ?? false,
+      database: { generateId: () => crypto.randomUUID() },
+    },
     user: {
       modelName: 'users',
       fields: { emailVerified: 'email_verified', ...timestamps },

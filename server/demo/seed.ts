@@ -55,11 +55,12 @@ export async function seedDemoIfEmpty(db: Db): Promise<boolean> {
 async function seedDemo(db: Db): Promise<void> {
   const [makerPerson, assistantPerson, galleryPerson] = demoSignIns.people;
   const password = demoSignIns.password;
-  const maker = await createUserWithPassword(db, { ...makerPerson, password });
-  const assistant = await createUserWithPassword(db, { ...assistantPerson, password });
-  const gallery = await createUserWithPassword(db, { ...galleryPerson, password });
-
+  // One transaction: a seed that fails halfway leaves the database empty, so it can run again.
   await db.transaction().execute(async (trx) => {
+    const maker = await createUserWithPassword(trx, { ...makerPerson, password });
+    const assistant = await createUserWithPassword(trx, { ...assistantPerson, password });
+    const gallery = await createUserWithPassword(trx, { ...galleryPerson, password });
+
     const { id: studioId } = await trx
       .insertInto('studios')
       .values({

@@ -11,10 +11,9 @@ import { workStatus } from '../works/work-status';
 
 /** The studio's figures at a glance: works by status, venues, and what is out now. */
 export async function getOverview(db: Db, scope: Scope): Promise<Overview> {
-  const studio = await db
-    .selectFrom('studios')
-    .select(['id', 'name', 'currency'])
-    .where('id', '=', scope.studioId)
+  const studio = await scoped
+    .studios(db, scope)
+    .select(['studios.id', 'studios.name', 'studios.currency'])
     .executeTakeFirst();
   if (!studio) throw notFound('The studio');
 

@@ -14,7 +14,6 @@ const mimeTypes: Record<string, string> = {
   gif: 'image/gif',
   tiff: 'image/tiff',
   avif: 'image/avif',
-  heif: 'image/heic',
 };
 
 export const thumbnailSize = 480;
@@ -36,7 +35,7 @@ export type CheckedImage = {
 const notAnImage = (name: string) =>
   new HttpError(
     'invalid_request',
-    `“${name}” is not a photo we can read. Upload JPEG, PNG, WebP, GIF, AVIF, HEIC or TIFF images.`,
+    `“${name}” is not a photo we can read. Upload JPEG, PNG, WebP, GIF, AVIF or TIFF images.`,
   );
 
 /**

@@ -1,6 +1,5 @@
 import express from 'express';
 
-import { type ConsignmentState } from '@/shared/schemas/consignment';
 import { type VenueHome } from '@/shared/schemas/overview';
 
 import { requireRole, scopeOf } from '../access/authenticate';
@@ -8,9 +7,6 @@ import { scoped } from '../access/scoped';
 import { listConsignmentSummaries } from '../consignments/consignments.repository';
 import { type AppContext } from '../context';
 import { notFound } from '../http/http-error';
-
-/** A venue sees a consignment once its terms are agreed, not while the maker is drafting it. */
-const visibleToVenue: ConsignmentState[] = ['agreed', 'dispatched', 'on-show', 'closed', 'settled'];
 
 /** The gallery side's home: the consignments its venue holds from the active studio. */
 export function venueHomeRouter({ db }: AppContext) {
@@ -33,7 +29,7 @@ export function venueHomeRouter({ db }: AppContext) {
       const body: VenueHome = {
         studio: { id: venue.studio_id, name: venue.studio_name },
         venue: { id: venue.id, name: venue.name },
-        consignments: await listConsignmentSummaries(db, scope, { states: visibleToVenue }),
+        consignments: await listConsignmentSummaries(db, scope),
       };
       res.json(body);
     });

@@ -126,6 +126,50 @@ describe('a gallery member of one studio', () => {
     });
   });
 
+  it("gets 404 for another studio's photos, even of works on that studio's consignments", async () => {
+    const { app, db, studioB, consignmentB } = await twoStudios();
+    const work = await db
+      .insertInto('works')
+      .values({
+        studio_id: studioB,
+        stock_number: 'B-W1',
+        title: 'B work',
+        retail_price: 1,
+        currency: 'GBP',
+      })
+      .returning('id')
+      .executeTakeFirstOrThrow();
+    const file = await db
+      .insertInto('files')
+      .values({ studio_id: studioB, sha256: 'b'.repeat(64), mime_type: 'image/png', byte_size: 1 })
+      .returning('id')
+      .executeTakeFirstOrThrow();
+    const photo = await db
+      .insertInto('work_photos')
+      .values({ work_id: work.id, file_id: file.id, position: 0 })
+      .returning('id')
+      .executeTakeFirstOrThrow();
+    await db
+      .insertInto('consignment_lines')
+      .values({
+        studio_id: studioB,
+        consignment_id: consignmentB,
+        work_id: work.id,
+        currency: 'GBP',
+        list_price: 1,
+        insurance_value: 1,
+      })
+      .execute();
+    const cookie = await signIn(app, 'gallery-a@example.test');
+    for (const path of [`/api/photos/${photo.id}`, `/api/photos/${photo.id}/thumbnail`]) {
+      const res = await request(app).get(path).set('Cookie', cookie);
+      expect(res.status).toBe(404);
+      expect(res.body).toEqual({
+        error: { code: 'not_found', message: 'That photo was not found.' },
+      });
+    }
+  });
+
   it('reads nothing of another studio anywhere it may go', async () => {
     const { app } = await twoStudios();
     const cookie = await signIn(app, 'gallery-a@example.test');

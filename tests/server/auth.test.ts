@@ -115,6 +115,19 @@ describe('POST /api/auth/sign-in/email', () => {
   });
 });
 
+describe('the session cookie behind HTTPS', () => {
+  it('is marked Secure when the public address is https', async () => {
+    const { app } = await withOwner({ publicUrl: 'https://saggar.example' });
+    const res = await request(app)
+      .post('/api/auth/sign-in/email')
+      .set('Host', 'saggar.example')
+      .send({ email: 'owner@example.test', password });
+    expect(res.status).toBe(200);
+    const cookie = ([] as string[]).concat(res.headers['set-cookie'] ?? []).join('\n');
+    expect(cookie).toMatch(/session_token=[^;]+;.*Secure/);
+  });
+});
+
 describe('POST /api/auth/sign-out', () => {
   it('ends the session so the cookie no longer works', async () => {
     const { app } = await withOwner();

@@ -33,6 +33,7 @@ export function worksToCsv(works: readonly Work[]): string {
       fields: columns.map(([header]) => header),
       data: works.map((work) => columns.map(([, cell]) => cell(work) ?? '')),
     },
-    { escapeFormulae: true, newline: '\r\n' },
+    // papaparse's own `true` tests /^[=+\-@\t\r].*$/, which a cell with a line break escapes.
+    { escapeFormulae: /^[=+\-@\t\r]/, newline: '\r\n' },
   );
 }

@@ -20,7 +20,7 @@ export const password = 'correct horse battery staple';
 
 /** The real app over a fresh in-memory database migrated to latest. */
 export async function createTestApp(
-  options: { signInLimit?: { max: number; windowMs: number } } = {},
+  options: { signInLimit?: { max: number; windowMs: number }; publicUrl?: string } = {},
 ) {
   const db = openDatabase(':memory:');
   await migrateToLatest(db);

@@ -142,7 +142,7 @@ describe('POST /api/works/:id/photos', () => {
       error: {
         code: 'invalid_request',
         message:
-          '“pot.jpg” is not a photo we can read. Upload JPEG, PNG, WebP, GIF, AVIF, HEIC or TIFF images.',
+          '“pot.jpg” is not a photo we can read. Upload JPEG, PNG, WebP, GIF, AVIF or TIFF images.',
       },
     });
     expect(await f.db.selectFrom('work_photos').select('id').execute()).toEqual([]);
@@ -362,6 +362,17 @@ describe('GET /api/photos/:photoId', () => {
       error: { code: 'not_found', message: 'That photo was not found.' },
     });
     expect(hidden.headers['cache-control'] ?? '').not.toContain('immutable');
+  });
+
+  it('does not show a venue’s staff the photos of a work the maker has only put on a draft', async () => {
+    const f = await studioFixture();
+    const { work, ids } = await workWithPhotos(f);
+    const draft = await addConsignment(f.db, f.studioA, f.venueA, 'DRAFT', 'draft');
+    await insertLine(f.db, f.studioA, draft, work);
+    const res = await request(f.app)
+      .get(`/api/photos/${ids[0]}`)
+      .set(await as(f, 'gallery'));
+    expect(res.status).toBe(404);
   });
 
   it('answers 404 to another studio and 400 for a bad id', async () => {

@@ -24,6 +24,8 @@ describe('GET /api/works/export.csv', () => {
       title: 'Jug, "large", with\nsecond line',
       series: '=HYPERLINK("x")',
       glaze: 'Shino — wood-fired',
+      // A formula with a line break in it must be escaped too (papaparse's default misses it).
+      notes: '=HYPERLINK("http://example.invalid","click")\nsecond line',
       retail_price: 12_050,
       cost_price: 3_005,
       weight_g: 17_500,
@@ -75,6 +77,7 @@ describe('GET /api/works/export.csv', () => {
       Title: tricky.title,
       // Formula-like cells carry an apostrophe so a spreadsheet does not run them.
       Series: `'${tricky.series}`,
+      Notes: `'${tricky.notes}`,
       Glaze: tricky.glaze,
       'Retail price': '120.50',
       'Cost price': '30.05',
