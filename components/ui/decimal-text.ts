@@ -25,7 +25,10 @@ function scaleDecimal(text: string, places: number): number | null {
 }
 
 function majorName(currency: string): string {
-  return currency === 'GBP' ? 'pounds and pence' : `${currency} with up to two decimals`;
+  if (currency === 'GBP') return 'pounds and pence';
+  const places = minorUnitOf(currency);
+  if (places === 0) return `whole ${currency}, without decimals`;
+  return `${currency} with up to ${places} decimals`;
 }
 
 /**

@@ -13,8 +13,13 @@ export function formatDate(isoDate: string): string {
 }
 
 /** "1 piece", "3 pieces". */
+/** "1 work", "3 works": a count with its noun, plural unless it is one. */
+export function counted(count: number, noun: string, plural = `${noun}s`): string {
+  return `${count} ${count === 1 ? noun : plural}`;
+}
+
 export function pieces(count: number): string {
-  return `${count} ${count === 1 ? 'piece' : 'pieces'}`;
+  return counted(count, 'piece');
 }
 
 /** The symbol a currency is written with in en-GB: "£" for GBP, "€" for EUR, the code otherwise. */

@@ -142,7 +142,9 @@ export function PhotoStrip({
           disabled={busy}
           onPress={onAdd}
         />
-        <Text variant="small">JPEG, PNG, WebP, GIF, AVIF or TIFF, up to 15 MB each; choose several at once.</Text>
+        <Text variant="small">
+          JPEG, PNG, WebP, GIF, AVIF or TIFF, up to 15 MB each; choose several at once.
+        </Text>
       </View>
     </View>
   );

@@ -223,5 +223,18 @@ export function useWorkImportCommitMutation() {
   });
 }
 
-/** The catalogue as CSV, downloaded by the browser with the session cookie. */
-export const worksExportPath = '/api/works/export.csv';
+/**
+ * The catalogue as CSV, with the list's search, filters and sort but not its paging, downloaded by
+ * the browser with the session cookie.
+ */
+export function worksExportPath(query: Omit<WorksFilter, 'page' | 'pageSize'>): string {
+  return `/api/works/export.csv${queryString({
+    search: query.search,
+    status: query.status,
+    series: query.series,
+    category: query.category,
+    venueId: query.venueId,
+    archived: query.archived,
+    sort: query.sort,
+  })}`;
+}

@@ -30,7 +30,7 @@ const fieldFor = (path: string) => fields.find((field) => field === path.split('
 function SettingsForm({ settings }: { settings: StudioSettings }) {
   const update = useStudioUpdateMutation();
   const check = zodResolver(studioSettingsUpdateSchema);
-  const { control, handleSubmit, setError, formState } = useForm<
+  const { control, handleSubmit, setError, formState, reset } = useForm<
     SettingsValues,
     unknown,
     StudioSettingsUpdate
@@ -55,7 +55,12 @@ function SettingsForm({ settings }: { settings: StudioSettings }) {
   });
   const submit = handleSubmit(async (values) => {
     try {
-      await update.mutateAsync(values);
+      const saved = await update.mutateAsync(values);
+      // The saved values become the form's baseline, so "saved" shows until the next edit.
+      reset({
+        stockNumberPattern: saved.stockNumberPattern,
+        priceStep: moneyText({ amount: saved.priceStep, currency: saved.currency }),
+      });
     } catch (error) {
       const message = serverErrors(error, fieldFor, (field, e) => setError(field, e));
       if (message !== null) setError('root.server', { message });

@@ -4,6 +4,7 @@ import { StyleSheet, View } from 'react-native';
 
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
+import { counted } from '@/components/ui/format';
 import { Notice } from '@/components/ui/notice';
 import { Screen } from '@/components/ui/screen';
 import { Select } from '@/components/ui/select';
@@ -19,10 +20,6 @@ import { ImportRows } from './import-rows';
 import { chooseCsvFile, type ChosenCsv } from './read-csv-file';
 
 type Mapping = Partial<Record<ImportField, string>>;
-
-function pieces(n: number) {
-  return `${n} ${n === 1 ? 'work' : 'works'}`;
-}
 
 /** Choose a CSV, see every row checked and how columns map, then import the good rows or nothing. */
 export function WorkImportScreen() {
@@ -73,9 +70,9 @@ export function WorkImportScreen() {
         <TextLink href="/works" label="All works" />
         <Heading level={1}>Import works from CSV</Heading>
         <Text variant="small">
-          Save the spreadsheet as CSV with a header row. Prices are in pounds and pence (12.50).
-          Nothing is written until you press Import; duplicate stock numbers are reported, not
-          merged.
+          Save the spreadsheet as CSV with a header row. Prices are in the studio’s currency, with a
+          decimal point (12.50). Nothing is written until you press Import; duplicate stock numbers
+          are reported, not merged.
         </Text>
       </View>
 
@@ -83,11 +80,11 @@ export function WorkImportScreen() {
 
       {commit.isSuccess ? (
         <Card testID="import-done">
-          <Heading level={2}>{`${pieces(commit.data.imported)} imported`}</Heading>
+          <Heading level={2}>{`${counted(commit.data.imported, 'work')} imported`}</Heading>
           <Text testID="import-done-summary">
             {commit.data.skipped.length === 0
               ? 'Every row was imported.'
-              : `${commit.data.skipped.length} rows were skipped because of the problems shown.`}
+              : `${counted(commit.data.skipped.length, 'row')} skipped because of the problems shown.`}
           </Text>
           <View style={styles.row}>
             <Link href="/works" asChild>
@@ -179,7 +176,7 @@ export function WorkImportScreen() {
           <View style={styles.row}>
             <Button
               testID="import-commit"
-              label={`Import ${pieces(data.validCount)}`}
+              label={`Import ${counted(data.validCount, 'work')}`}
               busyLabel="Importing…"
               busy={commit.isPending}
               disabled={data.validCount === 0 || mappingChanged}

@@ -1,7 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 
 import { Card } from '@/components/ui/card';
-import { formatDate } from '@/components/ui/format';
+import { counted, formatDate } from '@/components/ui/format';
 import { StateMark } from '@/components/ui/state-mark';
 import { EmptyView, ErrorView, LoadingView } from '@/components/ui/status-views';
 import { Heading, Text } from '@/components/ui/text';
@@ -71,7 +71,7 @@ export function WorkHistory({ workId }: { workId: number }) {
                 style={[styles.item, index > 0 && styles.divided]}
               >
                 <Text variant="bodyStrong">{`${stageWords[report.stage]} · ${formatDate(report.examinedOn)}`}</Text>
-                <Text variant="small">{`Grade: ${report.grade} · ${report.examinerName} · ${report.findingCount} findings`}</Text>
+                <Text variant="small">{`Grade: ${report.grade} · ${report.examinerName} · ${counted(report.findingCount, 'finding')}`}</Text>
               </View>
             ))}
           </Card>

@@ -107,6 +107,10 @@ export function WorksScreen() {
   );
 
   const works = useWorksQuery(filters);
+  // Archiving the last work of the last page leaves that page empty: step back to the last one.
+  const pageCount = Math.max(1, Math.ceil((works.data?.total ?? 0) / pageSize));
+  // Adjusting state while rendering, as React advises for state that follows other state.
+  if (works.data && page > pageCount) setPaging({ key: filterKey, page: pageCount });
   const facets = useWorkFacetsQuery();
 
   const sorting = toSorting(sort);
@@ -143,9 +147,9 @@ export function WorksScreen() {
             <Button testID="works-import" label="Import CSV" variant="secondary" />
           </Link>
           <DownloadLink
-            href={worksExportPath}
+            href={worksExportPath(filters)}
             fileName="saggar-works.csv"
-            label="Export CSV"
+            label={filtered ? 'Export these as CSV' : 'Export CSV'}
             testID="works-export"
           />
         </View>
