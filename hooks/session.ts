@@ -79,6 +79,12 @@ export function activeMembership(me: Me): Membership | null {
   return me.memberships.find((membership) => membership.id === me.activeMembershipId) ?? null;
 }
 
+/** The role of the membership in use, once known; the server checks it again on every request. */
+export function useActiveRole(): Membership['role'] | undefined {
+  const me = useMeQuery();
+  return me.data ? activeMembership(me.data)?.role : undefined;
+}
+
 export type Area = 'sign-in' | 'choose-studio' | 'studio' | 'venue';
 
 const areaHrefs = {

@@ -9,7 +9,9 @@ import {
 import { idParamsSchema } from '@/shared/schemas/work';
 
 import { requireRole, scopeOf } from '../access/authenticate';
+import { type Scope } from '../access/viewer';
 import { type AppContext } from '../context';
+import { HttpError } from '../http/http-error';
 import { validate } from '../http/validate';
 import { toVenue } from './venues.mapper';
 import { listVenueRows } from './venues.repository';
@@ -19,6 +21,13 @@ const list = validate({ query: venueListQuerySchema });
 const create = validate({ body: venueCreateSchema });
 const byId = validate({ params: idParamsSchema });
 const update = validate({ params: idParamsSchema, body: venueUpdateSchema });
+
+/** Venues' terms are the owner's to set (DESIGN.md, roles); an assistant keeps the details. */
+function checkTermsAllowed(scope: Scope, body: { defaultTerms?: unknown }) {
+  if (body.defaultTerms !== undefined && scope.role !== 'owner') {
+    throw new HttpError('forbidden', 'Only the studio’s owner can set a venue’s terms.');
+  }
+}
 
 /** `/api/venues`: where the studio sends work, with the terms each starts from. */
 export function venuesRouter({ db }: AppContext) {
@@ -31,13 +40,16 @@ export function venuesRouter({ db }: AppContext) {
       res.json(body);
     })
     .post('/', create, async (_req, res) => {
-      res.status(201).json(await createVenue(db, scopeOf(res), create.input(res).body));
+      const { body } = create.input(res);
+      checkTermsAllowed(scopeOf(res), body);
+      res.status(201).json(await createVenue(db, scopeOf(res), body));
     })
     .get('/:id', byId, async (_req, res) => {
       res.json(await getVenueDetail(db, scopeOf(res), byId.input(res).params.id));
     })
     .patch('/:id', update, async (_req, res) => {
       const { params, body } = update.input(res);
+      checkTermsAllowed(scopeOf(res), body);
       res.json(await updateVenue(db, scopeOf(res), params.id, body));
     });
 }

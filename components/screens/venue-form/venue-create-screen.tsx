@@ -8,11 +8,13 @@ import { TextLink } from '@/components/ui/text-link';
 import { spacing } from '@/constants/theme';
 import { useStudioQuery } from '@/hooks/queries/studio';
 import { useVenueCreateMutation } from '@/hooks/queries/venues';
+import { useActiveRole } from '@/hooks/session';
 
 import { VenueForm } from './venue-form';
-import { newVenueValues, venueCreateResolver } from './venue-form-values';
+import { newVenueValues, venueCreateResolvers } from './venue-form-values';
 
 export function VenueCreateScreen() {
+  const owner = useActiveRole() === 'owner';
   const router = useRouter();
   const studio = useStudioQuery();
   const create = useVenueCreateMutation();
@@ -22,7 +24,9 @@ export function VenueCreateScreen() {
         <TextLink href="/venues" label="All venues" />
         <Heading level={1}>New venue</Heading>
         <Text variant="small">
-          The terms start from the usual ones for UK craft retail; set them as agreed.
+          {owner
+            ? 'The terms start from the usual ones for UK craft retail; set them as agreed.'
+            : 'Enter the venue’s details; the studio’s owner sets its terms.'}
         </Text>
       </View>
       {studio.isPending ? (
@@ -33,7 +37,8 @@ export function VenueCreateScreen() {
         <VenueForm
           label="New venue"
           defaultValues={newVenueValues(studio.data.currency)}
-          resolver={venueCreateResolver}
+          resolver={owner ? venueCreateResolvers.withTerms : venueCreateResolvers.detailsOnly}
+          termsEditable={owner}
           submitLabel="Save venue"
           onSubmit={async (values) => {
             const venue = await create.mutateAsync(values);

@@ -7,11 +7,13 @@ import { Heading } from '@/components/ui/text';
 import { TextLink } from '@/components/ui/text-link';
 import { spacing } from '@/constants/theme';
 import { useVenueQuery, useVenueUpdateMutation } from '@/hooks/queries/venues';
+import { useActiveRole } from '@/hooks/session';
 
 import { VenueForm } from './venue-form';
-import { venueUpdateResolver, venueValues } from './venue-form-values';
+import { venueUpdateResolvers, venueValues } from './venue-form-values';
 
 export function VenueEditScreen({ id }: { id: number }) {
+  const owner = useActiveRole() === 'owner';
   const router = useRouter();
   const venue = useVenueQuery(id);
   const update = useVenueUpdateMutation(id);
@@ -31,7 +33,8 @@ export function VenueEditScreen({ id }: { id: number }) {
           <VenueForm
             label={`Edit ${venue.data.venue.name}`}
             defaultValues={venueValues(venue.data.venue)}
-            resolver={venueUpdateResolver}
+            resolver={owner ? venueUpdateResolvers.withTerms : venueUpdateResolvers.detailsOnly}
+            termsEditable={owner}
             submitLabel="Save changes"
             onSubmit={async (values) => {
               await update.mutateAsync(values);

@@ -165,11 +165,16 @@ export function toTermsInput(values: TermsFormValues): Converted<Record<string, 
   return { value: terms, messages };
 }
 
-export function toVenueInput(values: VenueFormValues): Converted<Record<string, unknown>> {
+/** The form as the API's venue body; without `withTerms` (an assistant) the terms stay out. */
+export function toVenueInput(
+  values: VenueFormValues,
+  withTerms = true,
+): Converted<Record<string, unknown>> {
   const input: Record<string, unknown> = { kind: values.kind };
   for (const field of textFields) input[field] = values[field];
   const country = values.country.trim().toUpperCase();
   input.country = country === '' ? null : country;
+  if (!withTerms) return { value: input, messages: {} };
   const terms = toTermsInput(values);
   input.defaultTerms = terms.value;
   return { value: input, messages: terms.messages };
@@ -221,9 +226,10 @@ export function previewTerms(values: TermsFormValues): Terms | null {
 
 function composeResolver<Parsed extends object>(
   check: Resolver<Record<string, unknown>, unknown, Parsed>,
+  withTerms: boolean,
 ): Resolver<VenueFormValues, unknown, Parsed> {
   return async (values, context, options) => {
-    const { value, messages } = toVenueInput(values);
+    const { value, messages } = toVenueInput(values, withTerms);
     const result = await check(value, context, options as never);
     const errors = { ...liftErrors(result.errors, venueFieldFor), ...messagesToErrors(messages) };
     if (Object.keys(errors).length > 0) return { values: {}, errors };
@@ -231,17 +237,23 @@ function composeResolver<Parsed extends object>(
   };
 }
 
-export const venueCreateResolver = composeResolver<VenueCreateParsed>(
-  zodResolver(venueCreateSchema) as unknown as Resolver<
-    Record<string, unknown>,
-    unknown,
-    VenueCreateParsed
-  >,
-);
-export const venueUpdateResolver = composeResolver<VenueUpdateParsed>(
-  zodResolver(venueUpdateSchema) as unknown as Resolver<
-    Record<string, unknown>,
-    unknown,
-    VenueUpdateParsed
-  >,
-);
+const checkCreate = zodResolver(venueCreateSchema) as unknown as Resolver<
+  Record<string, unknown>,
+  unknown,
+  VenueCreateParsed
+>;
+const checkUpdate = zodResolver(venueUpdateSchema) as unknown as Resolver<
+  Record<string, unknown>,
+  unknown,
+  VenueUpdateParsed
+>;
+
+/** Resolvers for the owner, who sets terms, and for an assistant, who keeps the details only. */
+export const venueCreateResolvers = {
+  withTerms: composeResolver(checkCreate, true),
+  detailsOnly: composeResolver(checkCreate, false),
+};
+export const venueUpdateResolvers = {
+  withTerms: composeResolver(checkUpdate, true),
+  detailsOnly: composeResolver(checkUpdate, false),
+};

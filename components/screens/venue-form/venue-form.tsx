@@ -7,6 +7,7 @@ import { Choice, type ChoiceOption } from '@/components/ui/choice';
 import { serverErrors } from '@/components/ui/form-errors';
 import { FormFooter } from '@/components/ui/form-footer';
 import { MoneyField } from '@/components/ui/money-field';
+import { Notice } from '@/components/ui/notice';
 import { NumberField } from '@/components/ui/number-field';
 import { Heading, Text } from '@/components/ui/text';
 import { TextField, type TextFieldProps } from '@/components/ui/text-field';
@@ -113,6 +114,8 @@ type VenueFormProps<Parsed extends object> = {
   onSubmit: (values: Parsed) => Promise<void>;
   submitLabel: string;
   label: string;
+  /** Only the owner sets terms; others see them, with the preview, but cannot change them. */
+  termsEditable: boolean;
 };
 
 /** A venue and its default terms, with what the maker would net shown beside the terms. */
@@ -122,6 +125,7 @@ export function VenueForm<Parsed extends object>({
   onSubmit,
   submitLabel,
   label,
+  termsEditable,
 }: VenueFormProps<Parsed>) {
   const { wide } = useBreakpoint();
   const { control, handleSubmit, setError, formState } = useForm<VenueFormValues, unknown, Parsed>({
@@ -144,7 +148,15 @@ export function VenueForm<Parsed extends object>({
     }
   });
 
-  const termsFields = (
+  const termsFields = !termsEditable ? (
+    <Card style={styles.section} testID="venue-terms-locked">
+      <Heading level={2}>Default terms</Heading>
+      <Notice
+        tone="info"
+        message="Only the studio’s owner sets a venue’s terms. A new venue starts from the studio’s usual terms; the preview shows what they net."
+      />
+    </Card>
+  ) : (
     <Card style={styles.section}>
       <Heading level={2}>Default terms</Heading>
       <Text variant="small">

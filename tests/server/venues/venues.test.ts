@@ -220,7 +220,7 @@ describe('PATCH /api/venues/:id', () => {
     };
     const res = await request(f.app)
       .patch(`/api/venues/${created.body.id}`)
-      .set(await as(f, 'assistant'))
+      .set(await as(f))
       .send({ town: 'Orford', phone: '', defaultTerms: terms });
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject({
@@ -230,6 +230,33 @@ describe('PATCH /api/venues/:id', () => {
       postcode: 'IP15 5AB',
       defaultTerms: terms,
     });
+  });
+
+  it('lets an assistant change the details but not the terms, which are the owner’s (DESIGN.md roles)', async () => {
+    const f = await studioFixture();
+    const created = await request(f.app)
+      .post('/api/venues')
+      .set(await as(f, 'assistant'))
+      .send(harbour);
+    expect(created.status).toBe(201);
+    const details = await request(f.app)
+      .patch(`/api/venues/${created.body.id}`)
+      .set(await as(f, 'assistant'))
+      .send({ town: 'Orford' });
+    expect(details.status).toBe(200);
+    const refused = await request(f.app)
+      .patch(`/api/venues/${created.body.id}`)
+      .set(await as(f, 'assistant'))
+      .send({ defaultTerms: { ...defaultTerms, commissionRateBp: 2000 } });
+    expect(refused.status).toBe(403);
+    expect(refused.body).toEqual({
+      error: { code: 'forbidden', message: 'Only the studio’s owner can set a venue’s terms.' },
+    });
+    const withTerms = await request(f.app)
+      .post('/api/venues')
+      .set(await as(f, 'assistant'))
+      .send({ ...harbour, defaultTerms });
+    expect(withTerms.status).toBe(403);
   });
 
   it('checks a postcode against the venue’s stored country', async () => {
