@@ -1,5 +1,5 @@
 import { isoDateInTimeZone } from '@/shared/money';
-import { counterOf, formatStockNumber, stockNumberGlob } from '@/shared/works/stock-number';
+import { formatStockNumber, highestCounter, stockNumberGlob } from '@/shared/works/stock-number';
 
 import { type Scope } from '../access/viewer';
 import { type Db } from '../db/database';
@@ -20,10 +20,7 @@ export async function stockNumberAllocator(
   const pattern = studio.stock_number_pattern;
   const year = Number(isoDateInTimeZone(now, studio.time_zone).slice(0, 4));
   const existing = await listStockNumbersLike(db, scope, stockNumberGlob(pattern, year));
-  let highest = 0;
-  for (const stockNumber of [...existing, ...alsoTaken]) {
-    highest = Math.max(highest, counterOf(pattern, year, stockNumber) ?? 0);
-  }
+  let highest = highestCounter(pattern, year, [...existing, ...alsoTaken]);
   return {
     peek: () => formatStockNumber(pattern, year, highest + 1),
     next: () => formatStockNumber(pattern, year, ++highest),

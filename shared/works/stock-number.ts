@@ -67,15 +67,20 @@ export function stockNumberGlob(pattern: string, year: number): string {
     .join('');
 }
 
-/**
- * The next stock number: one past the highest counter already used with the pattern in that
- * year (so gaps left by deleted works are not refilled), starting at 1.
- */
-export function nextStockNumber(pattern: string, year: number, existing: Iterable<string>): string {
+/** The highest counter already used with the pattern in that year; 0 when none is. */
+export function highestCounter(pattern: string, year: number, existing: Iterable<string>): number {
   let highest = 0;
   for (const stockNumber of existing) {
     const counter = counterOf(pattern, year, stockNumber);
     if (counter !== null && counter > highest) highest = counter;
   }
-  return formatStockNumber(pattern, year, highest + 1);
+  return highest;
+}
+
+/**
+ * The next stock number: one past the highest counter already used with the pattern in that
+ * year (so gaps left by deleted works are not refilled), starting at 1.
+ */
+export function nextStockNumber(pattern: string, year: number, existing: Iterable<string>): string {
+  return formatStockNumber(pattern, year, highestCounter(pattern, year, existing) + 1);
 }
