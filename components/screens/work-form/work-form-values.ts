@@ -16,6 +16,7 @@ import {
   type WorkUpdateParsed,
   workUpdateSchema,
 } from '@/shared/schemas/work';
+import { importFields } from '@/shared/schemas/work-import';
 
 /** What the form holds: text as typed, turned into the shared schema's shape when checked. */
 export type WorkFormValues = {
@@ -41,27 +42,8 @@ export type WorkFormValues = {
 };
 export type WorkField = keyof WorkFormValues;
 
-export const workFields = [
-  'stockNumber',
-  'title',
-  'year',
-  'series',
-  'category',
-  'clayBody',
-  'glaze',
-  'firingTempC',
-  'atmosphere',
-  'kiln',
-  'heightMm',
-  'widthMm',
-  'depthMm',
-  'weightG',
-  'retailPrice',
-  'costPrice',
-  'foodUse',
-  'careNotes',
-  'notes',
-] as const satisfies readonly WorkField[];
+/** Every field of the form is one a spreadsheet column can map to, and the other way round. */
+const workFields: readonly WorkField[] = importFields;
 
 const numberFields = ['year', 'firingTempC', 'heightMm', 'widthMm', 'depthMm', 'weightG'] as const;
 const textFields = [
