@@ -1,11 +1,10 @@
-import { Stack } from 'expo-router';
-
 import { NotFoundScreen } from '@/components/screens/not-found/not-found-screen';
+import { PageTitle } from '@/components/ui/page-title';
 
 export default function NotFound() {
   return (
     <>
-      <Stack.Screen options={{ title: 'Page not found' }} />
+      <PageTitle title="Page not found" />
       <NotFoundScreen />
     </>
   );

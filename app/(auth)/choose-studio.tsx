@@ -1,7 +1,6 @@
-import { Stack } from 'expo-router';
-
 import { ChooseStudioScreen } from '@/components/screens/choose-studio/choose-studio-screen';
 import { GateFallback } from '@/components/ui/gate-fallback';
+import { PageTitle } from '@/components/ui/page-title';
 import { useSessionGate } from '@/hooks/session';
 
 export default function ChooseStudioRoute() {
@@ -9,7 +8,7 @@ export default function ChooseStudioRoute() {
   if (gate.status !== 'ready') return <GateFallback gate={gate} />;
   return (
     <>
-      <Stack.Screen options={{ title: 'Choose a studio · Saggar' }} />
+      <PageTitle title="Choose a studio · Saggar" />
       <ChooseStudioScreen />
     </>
   );

@@ -1,6 +1,7 @@
-import { Redirect, Stack } from 'expo-router';
+import { Redirect } from 'expo-router';
 
 import { SignInScreen } from '@/components/screens/sign-in/sign-in-screen';
+import { PageTitle } from '@/components/ui/page-title';
 import { useSessionGate } from '@/hooks/session';
 
 export default function SignInRoute() {
@@ -9,7 +10,7 @@ export default function SignInRoute() {
   if (gate.status === 'redirect') return <Redirect href={gate.href} />;
   return (
     <>
-      <Stack.Screen options={{ title: 'Sign in · Saggar' }} />
+      <PageTitle title="Sign in · Saggar" />
       <SignInScreen />
     </>
   );

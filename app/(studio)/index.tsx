@@ -1,11 +1,10 @@
-import { Stack } from 'expo-router';
-
 import { OverviewScreen } from '@/components/screens/overview/overview-screen';
+import { PageTitle } from '@/components/ui/page-title';
 
 export default function OverviewRoute() {
   return (
     <>
-      <Stack.Screen options={{ title: 'Overview · Saggar' }} />
+      <PageTitle title="Overview · Saggar" />
       <OverviewScreen />
     </>
   );

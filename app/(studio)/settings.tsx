@@ -1,11 +1,10 @@
-import { Stack } from 'expo-router';
-
 import { SettingsScreen } from '@/components/screens/settings/settings-screen';
+import { PageTitle } from '@/components/ui/page-title';
 
 export default function SettingsRoute() {
   return (
     <>
-      <Stack.Screen options={{ title: 'Settings · Saggar' }} />
+      <PageTitle title="Settings · Saggar" />
       <SettingsScreen />
     </>
   );

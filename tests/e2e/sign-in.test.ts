@@ -64,6 +64,8 @@ describe.each<ViewportName>(['phone', 'wide'])('at %s size', (viewport) => {
         c.reference,
       );
     }
+    // The browser tab names the page (Expo Router sets it through its Head component).
+    expect(await page.title()).toBe('Overview · Saggar');
     await screenshot(page, `overview-${viewport}`);
     await expectAccessible(page);
 

@@ -1,11 +1,10 @@
-import { Stack } from 'expo-router';
-
 import { VenuesScreen } from '@/components/screens/venues/venues-screen';
+import { PageTitle } from '@/components/ui/page-title';
 
 export default function VenuesRoute() {
   return (
     <>
-      <Stack.Screen options={{ title: 'Venues · Saggar' }} />
+      <PageTitle title="Venues · Saggar" />
       <VenuesScreen />
     </>
   );

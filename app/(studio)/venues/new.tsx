@@ -1,11 +1,10 @@
-import { Stack } from 'expo-router';
-
 import { VenueCreateScreen } from '@/components/screens/venue-form/venue-create-screen';
+import { PageTitle } from '@/components/ui/page-title';
 
 export default function NewVenueRoute() {
   return (
     <>
-      <Stack.Screen options={{ title: 'New venue · Saggar' }} />
+      <PageTitle title="New venue · Saggar" />
       <VenueCreateScreen />
     </>
   );

@@ -1,11 +1,10 @@
-import { Stack } from 'expo-router';
-
 import { WorkImportScreen } from '@/components/screens/work-import/work-import-screen';
+import { PageTitle } from '@/components/ui/page-title';
 
 export default function ImportWorksRoute() {
   return (
     <>
-      <Stack.Screen options={{ title: 'Import works · Saggar' }} />
+      <PageTitle title="Import works · Saggar" />
       <WorkImportScreen />
     </>
   );

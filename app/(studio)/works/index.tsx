@@ -1,11 +1,10 @@
-import { Stack } from 'expo-router';
-
 import { WorksScreen } from '@/components/screens/works/works-screen';
+import { PageTitle } from '@/components/ui/page-title';
 
 export default function WorksRoute() {
   return (
     <>
-      <Stack.Screen options={{ title: 'Works · Saggar' }} />
+      <PageTitle title="Works · Saggar" />
       <WorksScreen />
     </>
   );

@@ -1,11 +1,10 @@
-import { Stack } from 'expo-router';
-
 import { WorkCreateScreen } from '@/components/screens/work-form/work-create-screen';
+import { PageTitle } from '@/components/ui/page-title';
 
 export default function NewWorkRoute() {
   return (
     <>
-      <Stack.Screen options={{ title: 'New work · Saggar' }} />
+      <PageTitle title="New work · Saggar" />
       <WorkCreateScreen />
     </>
   );

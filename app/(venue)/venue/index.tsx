@@ -1,11 +1,10 @@
-import { Stack } from 'expo-router';
-
 import { VenueHomeScreen } from '@/components/screens/venue-home/venue-home-screen';
+import { PageTitle } from '@/components/ui/page-title';
 
 export default function VenueHomeRoute() {
   return (
     <>
-      <Stack.Screen options={{ title: 'Consignments · Saggar' }} />
+      <PageTitle title="Consignments · Saggar" />
       <VenueHomeScreen />
     </>
   );

@@ -1,7 +1,8 @@
-import { Stack, useLocalSearchParams } from 'expo-router';
+import { useLocalSearchParams } from 'expo-router';
 
 import { NotFoundScreen } from '@/components/screens/not-found/not-found-screen';
 import { VenueEditScreen } from '@/components/screens/venue-form/venue-edit-screen';
+import { PageTitle } from '@/components/ui/page-title';
 
 export default function EditVenueRoute() {
   const { id } = useLocalSearchParams<{ id: string }>();
@@ -9,7 +10,7 @@ export default function EditVenueRoute() {
   if (!Number.isInteger(venueId) || venueId <= 0) return <NotFoundScreen />;
   return (
     <>
-      <Stack.Screen options={{ title: 'Edit venue · Saggar' }} />
+      <PageTitle title="Edit venue · Saggar" />
       <VenueEditScreen id={venueId} />
     </>
   );

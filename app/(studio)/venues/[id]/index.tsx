@@ -1,7 +1,8 @@
-import { Stack, useLocalSearchParams } from 'expo-router';
+import { useLocalSearchParams } from 'expo-router';
 
 import { NotFoundScreen } from '@/components/screens/not-found/not-found-screen';
 import { VenueScreen } from '@/components/screens/venue/venue-screen';
+import { PageTitle } from '@/components/ui/page-title';
 
 export default function VenueRoute() {
   const { id } = useLocalSearchParams<{ id: string }>();
@@ -9,7 +10,7 @@ export default function VenueRoute() {
   if (!Number.isInteger(venueId) || venueId <= 0) return <NotFoundScreen />;
   return (
     <>
-      <Stack.Screen options={{ title: 'Venue · Saggar' }} />
+      <PageTitle title="Venue · Saggar" />
       <VenueScreen id={venueId} />
     </>
   );

@@ -1,7 +1,8 @@
-import { Stack, useLocalSearchParams } from 'expo-router';
+import { useLocalSearchParams } from 'expo-router';
 
 import { NotFoundScreen } from '@/components/screens/not-found/not-found-screen';
 import { WorkEditScreen } from '@/components/screens/work-form/work-edit-screen';
+import { PageTitle } from '@/components/ui/page-title';
 
 export default function EditWorkRoute() {
   const { id } = useLocalSearchParams<{ id: string }>();
@@ -9,7 +10,7 @@ export default function EditWorkRoute() {
   if (!Number.isInteger(workId) || workId <= 0) return <NotFoundScreen />;
   return (
     <>
-      <Stack.Screen options={{ title: 'Edit work · Saggar' }} />
+      <PageTitle title="Edit work · Saggar" />
       <WorkEditScreen id={workId} />
     </>
   );

@@ -1,7 +1,8 @@
-import { Stack, useLocalSearchParams } from 'expo-router';
+import { useLocalSearchParams } from 'expo-router';
 
 import { NotFoundScreen } from '@/components/screens/not-found/not-found-screen';
 import { WorkScreen } from '@/components/screens/work/work-screen';
+import { PageTitle } from '@/components/ui/page-title';
 
 export default function WorkRoute() {
   const { id } = useLocalSearchParams<{ id: string }>();
@@ -9,7 +10,7 @@ export default function WorkRoute() {
   if (!Number.isInteger(workId) || workId <= 0) return <NotFoundScreen />;
   return (
     <>
-      <Stack.Screen options={{ title: 'Work · Saggar' }} />
+      <PageTitle title="Work · Saggar" />
       <WorkScreen id={workId} />
     </>
   );
