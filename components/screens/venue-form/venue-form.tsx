@@ -1,9 +1,9 @@
-import { type ReactNode } from 'react';
 import { type Control, Controller, type Resolver, useForm, useWatch } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 
 import { Card } from '@/components/ui/card';
 import { Choice, type ChoiceOption } from '@/components/ui/choice';
+import { FieldCell, FieldRow } from '@/components/ui/field-row';
 import { serverErrors } from '@/components/ui/form-errors';
 import { FormFooter } from '@/components/ui/form-footer';
 import { MoneyField } from '@/components/ui/money-field';
@@ -101,13 +101,6 @@ function Pick<N extends ChoiceName>({
   );
 }
 
-function Row({ children }: { children: ReactNode }) {
-  return <View style={styles.row}>{children}</View>;
-}
-function Cell({ children, basis = 200 }: { children: ReactNode; basis?: number }) {
-  return <View style={[styles.cell, { flexBasis: basis }]}>{children}</View>;
-}
-
 type VenueFormProps<Parsed extends object> = {
   defaultValues: VenueFormValues;
   resolver: Resolver<VenueFormValues, unknown, Parsed>;
@@ -162,14 +155,14 @@ export function VenueForm<Parsed extends object>({
       <Text variant="small">
         Copied onto each consignment when it is agreed; change them there if a show differs.
       </Text>
-      <Row>
-        <Cell basis={140}>
+      <FieldRow>
+        <FieldCell basis={140}>
           <Input control={any} name="commissionRate" label="Commission" kind="percent" />
-        </Cell>
-        <Cell basis={140}>
+        </FieldCell>
+        <FieldCell basis={140}>
           <Input control={any} name="vatRate" label="VAT rate" kind="percent" />
-        </Cell>
-        <Cell basis={120}>
+        </FieldCell>
+        <FieldCell basis={120}>
           <Input
             control={any}
             name="currency"
@@ -177,8 +170,8 @@ export function VenueForm<Parsed extends object>({
             autoCapitalize="characters"
             maxLength={3}
           />
-        </Cell>
-      </Row>
+        </FieldCell>
+      </FieldRow>
       <Pick control={any} name="venueRole" label="The venue" choices={options(venueRoleWords)} />
       <Pick
         control={any}
@@ -217,8 +210,8 @@ export function VenueForm<Parsed extends object>({
         />
       ) : null}
       <Pick control={any} name="insuredBy" label="Who insures" choices={options(insurerWords)} />
-      <Row>
-        <Cell basis={140}>
+      <FieldRow>
+        <FieldCell basis={140}>
           <Input
             control={any}
             name="paymentDays"
@@ -226,8 +219,8 @@ export function VenueForm<Parsed extends object>({
             kind="number"
             unit="days"
           />
-        </Cell>
-      </Row>
+        </FieldCell>
+      </FieldRow>
       <Pick
         control={any}
         name="paymentFrom"
@@ -243,11 +236,11 @@ export function VenueForm<Parsed extends object>({
         <Heading level={2}>The venue</Heading>
         <Input control={any} name="name" label="Name" />
         <Pick control={any} name="kind" label="Kind" choices={options(venueKindWords)} />
-        <Row>
-          <Cell>
+        <FieldRow>
+          <FieldCell>
             <Input control={any} name="contactName" label="Contact name (optional)" />
-          </Cell>
-          <Cell>
+          </FieldCell>
+          <FieldCell>
             <Input
               control={any}
               name="email"
@@ -256,26 +249,26 @@ export function VenueForm<Parsed extends object>({
               autoCapitalize="none"
               autoCorrect={false}
             />
-          </Cell>
-          <Cell>
+          </FieldCell>
+          <FieldCell>
             <Input control={any} name="phone" label="Phone (optional)" inputMode="tel" />
-          </Cell>
-        </Row>
+          </FieldCell>
+        </FieldRow>
         <Input control={any} name="addressLine1" label="Address (optional)" />
         <Input control={any} name="addressLine2" label="Address, second line (optional)" />
-        <Row>
-          <Cell>
+        <FieldRow>
+          <FieldCell>
             <Input control={any} name="town" label="Town (optional)" />
-          </Cell>
-          <Cell basis={140}>
+          </FieldCell>
+          <FieldCell basis={140}>
             <Input
               control={any}
               name="postcode"
               label="Postcode (optional)"
               autoCapitalize="characters"
             />
-          </Cell>
-          <Cell basis={120}>
+          </FieldCell>
+          <FieldCell basis={120}>
             <Input
               control={any}
               name="country"
@@ -284,8 +277,8 @@ export function VenueForm<Parsed extends object>({
               autoCapitalize="characters"
               maxLength={2}
             />
-          </Cell>
-        </Row>
+          </FieldCell>
+        </FieldRow>
         <Input
           control={any}
           name="vatNumber"
@@ -321,8 +314,6 @@ export function VenueForm<Parsed extends object>({
 const styles = StyleSheet.create({
   form: { gap: spacing.lg },
   section: { gap: spacing.md },
-  row: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.md },
-  cell: { flexGrow: 1, minWidth: 110 },
   terms: { gap: spacing.lg },
   termsWide: { flexDirection: 'row', alignItems: 'flex-start' },
   termsFields: { flex: 1 },

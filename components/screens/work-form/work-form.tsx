@@ -11,6 +11,7 @@ import { StyleSheet, View } from 'react-native';
 
 import { Card } from '@/components/ui/card';
 import { Choice } from '@/components/ui/choice';
+import { FieldCell, FieldRow } from '@/components/ui/field-row';
 import { serverErrors } from '@/components/ui/form-errors';
 import { FormFooter } from '@/components/ui/form-footer';
 import { MoneyField } from '@/components/ui/money-field';
@@ -117,14 +118,6 @@ function Section({ title, children }: { title: string; children: ReactNode }) {
   );
 }
 
-function Row({ children }: { children: ReactNode }) {
-  return <View style={styles.row}>{children}</View>;
-}
-
-function Cell({ children, basis = 140 }: { children: ReactNode; basis?: number }) {
-  return <View style={[styles.cell, { flexBasis: basis }]}>{children}</View>;
-}
-
 type WorkFormProps<Parsed extends object> = {
   mode: 'create' | 'update';
   defaultValues: WorkFormValues;
@@ -173,8 +166,8 @@ export function WorkForm<Parsed extends object>({
   return (
     <View style={styles.form} role="form" aria-label={mode === 'create' ? 'New work' : 'Edit work'}>
       <Section title="The piece">
-        <Row>
-          <Cell basis={160}>
+        <FieldRow>
+          <FieldCell basis={160}>
             <PlainField
               control={plainControl}
               name="stockNumber"
@@ -183,36 +176,36 @@ export function WorkForm<Parsed extends object>({
                 mode === 'create' ? 'The next in your pattern; change it if you like.' : undefined
               }
             />
-          </Cell>
-          <Cell basis={120}>
+          </FieldCell>
+          <FieldCell basis={120}>
             <MeasureField control={plainControl} name="year" label="Year made" unit="" />
-          </Cell>
-        </Row>
+          </FieldCell>
+        </FieldRow>
         <PlainField control={plainControl} name="title" label="Title" />
-        <Row>
-          <Cell basis={180}>
+        <FieldRow>
+          <FieldCell basis={180}>
             <PlainField control={plainControl} name="series" label="Series (optional)" />
-          </Cell>
-          <Cell basis={180}>
+          </FieldCell>
+          <FieldCell basis={180}>
             <PlainField
               control={plainControl}
               name="category"
               label="Category (optional)"
               hint="Jar, bowl, vase…"
             />
-          </Cell>
-        </Row>
+          </FieldCell>
+        </FieldRow>
       </Section>
 
       <Section title="Materials and firing">
-        <Row>
-          <Cell basis={200}>
+        <FieldRow>
+          <FieldCell basis={200}>
             <PlainField control={plainControl} name="clayBody" label="Clay body" />
-          </Cell>
-          <Cell basis={200}>
+          </FieldCell>
+          <FieldCell basis={200}>
             <PlainField control={plainControl} name="glaze" label="Glaze" />
-          </Cell>
-        </Row>
+          </FieldCell>
+        </FieldRow>
         <MeasureField
           control={plainControl}
           name="firingTempC"
@@ -220,46 +213,46 @@ export function WorkForm<Parsed extends object>({
           unit="°C"
         />
         <ConeHint temperatureText={firing} />
-        <Row>
-          <Cell basis={200}>
+        <FieldRow>
+          <FieldCell basis={200}>
             <PlainField
               control={plainControl}
               name="atmosphere"
               label="Atmosphere"
               hint="Oxidation, reduction, soda…"
             />
-          </Cell>
-          <Cell basis={200}>
+          </FieldCell>
+          <FieldCell basis={200}>
             <PlainField
               control={plainControl}
               name="kiln"
               label="Kiln type"
               hint="Electric, gas, wood…"
             />
-          </Cell>
-        </Row>
+          </FieldCell>
+        </FieldRow>
       </Section>
 
       <Section title="Size and weight">
-        <Row>
-          <Cell>
+        <FieldRow>
+          <FieldCell basis={140}>
             <MeasureField control={plainControl} name="heightMm" label="Height" unit="mm" />
-          </Cell>
-          <Cell>
+          </FieldCell>
+          <FieldCell basis={140}>
             <MeasureField control={plainControl} name="widthMm" label="Width" unit="mm" />
-          </Cell>
-          <Cell>
+          </FieldCell>
+          <FieldCell basis={140}>
             <MeasureField control={plainControl} name="depthMm" label="Depth" unit="mm" />
-          </Cell>
-          <Cell>
+          </FieldCell>
+          <FieldCell basis={140}>
             <MeasureField control={plainControl} name="weightG" label="Weight" unit="g" />
-          </Cell>
-        </Row>
+          </FieldCell>
+        </FieldRow>
       </Section>
 
       <Section title="Price">
-        <Row>
-          <Cell basis={180}>
+        <FieldRow>
+          <FieldCell basis={180}>
             <PriceField
               control={plainControl}
               name="retailPrice"
@@ -267,8 +260,8 @@ export function WorkForm<Parsed extends object>({
               hint="What a buyer pays, in pounds and pence."
               currency={currency}
             />
-          </Cell>
-          <Cell basis={180}>
+          </FieldCell>
+          <FieldCell basis={180}>
             <PriceField
               control={plainControl}
               name="costPrice"
@@ -276,8 +269,8 @@ export function WorkForm<Parsed extends object>({
               hint="Never shown to venues."
               currency={currency}
             />
-          </Cell>
-        </Row>
+          </FieldCell>
+        </FieldRow>
       </Section>
 
       <Section title="Food use and care">
@@ -337,6 +330,4 @@ export function WorkForm<Parsed extends object>({
 const styles = StyleSheet.create({
   form: { gap: spacing.lg },
   section: { gap: spacing.md },
-  row: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.md },
-  cell: { flexGrow: 1, minWidth: 120 },
 });
