@@ -22,7 +22,7 @@ const create = validate({ body: venueCreateSchema });
 const byId = validate({ params: idParamsSchema });
 const update = validate({ params: idParamsSchema, body: venueUpdateSchema });
 
-/** Venues' terms are the owner's to set (DESIGN.md, roles); an assistant keeps the details. */
+/** Venues' terms are the owner's to set (docs/domain.md, roles); an assistant keeps the details. */
 function checkTermsAllowed(scope: Scope, body: { defaultTerms?: unknown }) {
   if (body.defaultTerms !== undefined && scope.role !== 'owner') {
     throw new HttpError('forbidden', 'Only the studio’s owner can set a venue’s terms.');

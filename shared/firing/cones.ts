@@ -10,7 +10,7 @@ export interface ConeRow {
 
 /**
  * Orton Ceramic Foundation, "Temperature Equivalents Chart, °C, cones 022–14" (2016),
- * self-supporting cones; only the cones TRADE-FACTS.md lists, coolest first.
+ * self-supporting cones; only the cones both transcriptions agree on, coolest first.
  */
 export const ortonCones: readonly ConeRow[] = [
   { cone: '06', temperatureC: { 60: 998, 150: 1013 } },

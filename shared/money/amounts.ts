@@ -31,8 +31,8 @@ export function assertCurrency(value: Money, currency: string): void {
 }
 
 /**
- * The exact sum of amounts in one currency (a caution from TRADE-FACTS.md: published totals are
- * checked, not copied). Refused if it leaves the range where integers are exact.
+ * The exact sum of amounts in one currency: totals are worked out, never copied (a published
+ * example once added £75 + £37.50 to £115.50). Refused outside the range where integers are exact.
  */
 export function sumMoney(values: readonly Money[], currency: string): Money {
   let total = 0;

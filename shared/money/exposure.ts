@@ -28,7 +28,7 @@ export interface Exposure {
   byConsignment: (ExposureTotal & { consignmentId: number; venueId: number })[];
 }
 
-/** Whether a line is out on a date: dispatched by then and not yet sold or returned (DESIGN.md). */
+/** Whether a line is out on a date: dispatched by then and not yet sold or returned (docs/money-rules.md). */
 export function isOutOn(line: Pick<ExposureLine, 'dispatchDate' | 'endDate'>, date: IsoDate) {
   return (
     line.dispatchDate !== null &&
@@ -39,7 +39,7 @@ export function isOutOn(line: Pick<ExposureLine, 'dispatchDate' | 'endDate'>, da
 
 /**
  * Exposure: the sum of the insurance values of every line still out on a date, per consignment,
- * per venue and for the studio (DESIGN.md, "exposure").
+ * per venue and for the studio (docs/money-rules.md, "Insurance and exposure").
  */
 export function exposureOn(
   lines: readonly ExposureLine[],

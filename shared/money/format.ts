@@ -17,7 +17,7 @@ const formatters = new Map<string, Intl.NumberFormat>();
 
 /**
  * An amount for people, by the locale's conventions (Intl.NumberFormat, the reference named in
- * TRADE-FACTS.md), always showing the ISO 4217 minor unit: £1,234.50, €1.234,50 in de-DE, ¥1,234.
+ * docs/money-rules.md), always showing the ISO 4217 minor unit: £1,234.50, €1.234,50 in de-DE, ¥1,234.
  */
 export function formatMoney(money: Money, locale = 'en-GB'): string {
   const key = `${locale}|${money.currency}`;

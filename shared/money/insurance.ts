@@ -11,7 +11,7 @@ const rateOf = applyRate;
 const vatInside = vatInGross;
 
 /**
- * A line's insurance value by the terms' basis (DESIGN.md; TRADE-FACTS.md trade practice: "no less
+ * A line's insurance value by the terms' basis (docs/money-rules.md; common practice, "no less
  * than the agreed sale price less the venue's commission, excluding VAT"). `maker-net` is L − C at
  * S = L and `retail` is L, with no VAT in either; `agreed` is the value the terms record.
  */

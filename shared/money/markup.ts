@@ -16,7 +16,7 @@ export interface MarkUp {
 /**
  * Mark-up pricing, the venue's side of price planning: retail = the maker's price × the mark-up
  * (in basis points, ×2.2 = 22000), rounded half-up. The venue keeps the difference; when it
- * charges VAT on its commission, that VAT is the VAT fraction of what it keeps (TRADE-FACTS.md
+ * charges VAT on its commission, that VAT is the VAT fraction of what it keeps (docs/money-rules.md
  * worked settlement: £100 × 2.2 = £220, venue keeps £120 = £100 commission + £20 VAT).
  */
 export function markUp(

@@ -4,7 +4,7 @@ import { MoneyRuleError } from './errors';
 
 /**
  * When a sale must be paid for under the payment terms: a number of days from the sale, from the
- * end of the month of sale, or from the show's closing (DESIGN.md; TRADE-FACTS.md trade practice:
+ * end of the month of sale, or from the show's closing (docs/money-rules.md; common practice:
  * commonly 30 days from the month end, exhibitions after the show closes).
  */
 export function paymentDueDate(

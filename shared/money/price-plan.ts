@@ -5,7 +5,7 @@ import { MoneyRuleError } from './errors';
 import { makerNet, splitSale, trySplitSale } from './split';
 
 /**
- * Price planning (DESIGN.md): the lowest list price, a multiple of the price step, at which a sale
+ * Price planning (docs/money-rules.md): the lowest list price, a multiple of the price step, at which a sale
  * at that price nets the maker at least `wantedNet` (after VAT, as `makerNet`). Rounding makes the
  * net rise unevenly with the price, so the search checks the step below its answer too.
  */
@@ -48,7 +48,7 @@ export interface VenueNet {
 
 /**
  * One list price across several venues side by side: each venue's split of a sale at that price
- * and what the maker nets there (DESIGN.md, price planning).
+ * and what the maker nets there (docs/money-rules.md, price planning).
  */
 export function netsAcrossVenues(listPrice: Money, venues: readonly VenueTerms[]): VenueNet[] {
   return venues.map(({ venueId, terms }) => {

@@ -15,7 +15,7 @@ const MAX_AMOUNT = MAX_MONEY_AMOUNT;
 const BP = BASIS_POINTS;
 
 /**
- * Splits one sale (DESIGN.md, "Terms and the money rules"). Commission on the price without the
+ * Splits one sale (docs/money-rules.md, "One sale"). Commission on the price without the
  * maker's VAT: `shared` r·S, `venue` max(0, r·L − (L − S)), `maker` r·L; VAT on commission
  * `added` v·C or `included` C·v/(1+v); a registered maker's output VAT is the VAT fraction of S.
  * Each is rounded half-up per line (HMRC VATREC12030) and the maker's share is what is left, so

@@ -65,7 +65,7 @@ export interface Statement {
 }
 
 /**
- * A statement of account for a period (TRADE-FACTS.md trade practice: monthly or end-of-show
+ * A statement of account for a period (docs/money-rules.md; common practice: monthly or end-of-show
  * statements): each sale in the period split by its terms, the totals, the payments received,
  * and the balance carried from earlier sales and payments, with due dates from the payment terms.
  */

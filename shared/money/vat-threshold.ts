@@ -28,7 +28,7 @@ export function ukVatRegistrationThreshold(date: IsoDate): Money | null {
 }
 
 /**
- * A sale's contribution to the maker's turnover (DESIGN.md; ICAEW on disclosed agents): through
+ * A sale's contribution to the maker's turnover (docs/money-rules.md; ICAEW on disclosed agents): through
  * an agent the whole sale price is the maker's supply; a venue buying on sale or return makes the
  * maker's turnover what it pays, the maker's share.
  */

@@ -55,7 +55,7 @@ function rateBpSchema(what: string) {
     .max(10000, { error: `The ${what} cannot be above 100%.` });
 }
 
-/** The terms agreed with a venue, copied onto each consignment (DESIGN.md, "Terms"). */
+/** The terms agreed with a venue, copied onto each consignment (docs/money-rules.md, "Terms"). */
 export const termsSchema = z
   .strictObject({
     currency: currencyCodeSchema,
@@ -89,7 +89,7 @@ export const termsSchema = z
   });
 export type Terms = z.infer<typeof termsSchema>;
 
-/** Where a venue form starts: the usual UK craft-shop terms (TRADE-FACTS.md, trade practice). */
+/** Where a venue form starts: the usual UK craft-shop terms (docs/money-rules.md; common practice). */
 export const defaultTerms: Readonly<Terms> = Object.freeze({
   currency: 'GBP',
   commissionRateBp: 4000,

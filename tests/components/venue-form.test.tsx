@@ -19,7 +19,7 @@ function renderForm(termsEditable: boolean, onSubmit: (values: object) => Promis
   );
 }
 
-describe('VenueForm terms, which only the owner sets (DESIGN.md roles)', () => {
+describe('VenueForm terms, which only the owner sets (docs/domain.md roles)', () => {
   it('lets the owner edit the terms and sends them', async () => {
     const onSubmit = jest.fn(async () => {});
     renderForm(true, onSubmit);

@@ -25,7 +25,7 @@ async function asAssistant() {
 }
 
 describe('POST /api/quotes/split', () => {
-  // TRADE-FACTS "Worked settlements": maker not registered, venue registered, 40% + VAT, £100
+  // Worked example (docs/money-rules.md, HMRC 20% rate): maker not registered, venue registered, 40% + VAT, £100
   // sale: commission £40.00, VAT on commission £8.00, maker £52.00 (rule: VAT added = v·C).
   it('splits a £100 sale at 40% plus VAT into £40 + £8 + £52', async () => {
     const { app, cookie } = await asAssistant();
@@ -40,8 +40,8 @@ describe('POST /api/quotes/split', () => {
       makerShare: gbp(5_200),
       makerOutputVat: gbp(0),
       makerReclaimableVat: gbp(0),
-      // Maker-net insurance basis: list price less commission, without VAT (TRADE-FACTS, trade
-      // practice: model consignment agreement checklists, secondary).
+      // Maker-net insurance basis: list price less commission, without VAT (common practice; model
+      // consignment agreement checklists, secondary).
       insuranceValue: gbp(6_000),
     });
   });
@@ -89,7 +89,7 @@ describe('POST /api/quotes/split', () => {
 });
 
 describe('POST /api/quotes/price-plan', () => {
-  // Rule of DESIGN.md: the list price that yields the wanted net, rounded up to the price step.
+  // Rule of docs/money-rules.md: the list price that yields the wanted net, rounded up to the price step.
   // At 40% with no VAT on commission, a £60 net needs £100; with a £5 step, £100 stays £100.
   it('plans the list price for a wanted net, rounded up to the step, and splits it again', async () => {
     const { app, cookie } = await asAssistant();

@@ -13,7 +13,7 @@ const as = async (f: Fixture, who: Parameters<Fixture['cookie']>[0] = 'owner') =
 });
 
 // A GB number that passes the mod-97 check and one that fails it, as jsvat (the reference
-// library named in TRADE-FACTS.md) judges them; a postcode as the `postcode` package does.
+// general-purpose reference library) judges them; a postcode as the `postcode` package does.
 const goodVat = 'GB980780684';
 const badVat = 'GB123456789';
 const goodPostcode = 'ip15 5ab';
@@ -232,7 +232,7 @@ describe('PATCH /api/venues/:id', () => {
     });
   });
 
-  it('lets an assistant change the details but not the terms, which are the owner’s (DESIGN.md roles)', async () => {
+  it('lets an assistant change the details but not the terms, which are the owner’s (docs/domain.md roles)', async () => {
     const f = await studioFixture();
     const created = await request(f.app)
       .post('/api/venues')

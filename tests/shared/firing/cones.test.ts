@@ -8,7 +8,7 @@ import {
 } from '@/shared/firing/cones';
 
 // Orton Ceramic Foundation, "Temperature Equivalents Chart, °C, cones 022–14" (2016), via
-// TRADE-FACTS.md "Making": cone, °C at 60 °C/h, °C at 150 °C/h.
+// Orton Ceramic Foundation, "Temperature Equivalents Chart, °C" (2016), as transcribed: cone, °C at 60 °C/h, °C at 150 °C/h.
 const published: [string, number, number][] = [
   ['06', 998, 1013],
   ['04', 1063, 1077],
@@ -21,7 +21,7 @@ const published: [string, number, number][] = [
   ['13', 1331, 1348],
 ];
 
-describe('Orton cones (TRADE-FACTS.md "Making")', () => {
+describe('Orton cones (Orton Ceramic Foundation chart, 2016)', () => {
   it('holds exactly the listed cones', () => {
     expect(ortonCones.map((row) => row.cone)).toEqual(published.map(([cone]) => cone));
   });

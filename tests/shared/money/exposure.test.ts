@@ -13,7 +13,7 @@ const line = (changes: Partial<ExposureLine> & { id: number }): ExposureLine => 
   ...changes,
 });
 
-describe('exposureOn (DESIGN.md: the insured value of every line still out)', () => {
+describe('exposureOn (docs/money-rules.md: the insured value of every line still out)', () => {
   const lines = [
     line({ id: 1 }),
     line({ id: 2, insuranceValue: money(4000, 'GBP'), endDate: '2024-06-10' }), // sold 10 June

@@ -6,7 +6,7 @@ import { currencyCodes, isCurrencyCode, minorUnitOf } from '@/shared/schemas/mon
 
 import { RUNS } from './arbitraries';
 
-describe('minor units (TRADE-FACTS.md "Money and currencies", ISO 4217)', () => {
+describe('minor units (ISO 4217, as currency-codes carries it)', () => {
   it('GBP 2, EUR 2, USD 2, JPY 0, KRW 0, BHD 3', () => {
     const codes = ['GBP', 'EUR', 'USD', 'JPY', 'KRW', 'BHD'];
     expect(codes.map(minorUnitOf)).toEqual([2, 2, 2, 0, 0, 3]);
@@ -41,7 +41,7 @@ describe('toDecimalString', () => {
   });
 });
 
-describe('formatMoney agrees with Intl.NumberFormat (TRADE-FACTS.md reference libraries)', () => {
+describe('formatMoney agrees with Intl.NumberFormat (the built-in reference formatter)', () => {
   const cases: [string, string][] = [
     ['GBP', 'en-GB'],
     ['EUR', 'de-DE'],

@@ -4,7 +4,7 @@ import { defaultTerms, type Terms } from '@/shared/schemas/terms';
 const gbp = (pence: number) => money(pence, 'GBP');
 const terms = (changes: Partial<Terms>): Terms => ({ ...defaultTerms, ...changes });
 
-describe('insuranceValue: basis of DESIGN.md and TRADE-FACTS.md trade practice', () => {
+describe('insuranceValue: basis of docs/money-rules.md (common practice)', () => {
   it('maker-net: the agreed price less the venue’s commission, excluding VAT (model agreements)', () => {
     expect(insuranceValue(terms({}), gbp(10000))).toEqual(gbp(6000));
     // VAT added on the commission is not deducted: the value excludes VAT.
@@ -12,7 +12,7 @@ describe('insuranceValue: basis of DESIGN.md and TRADE-FACTS.md trade practice',
   });
 
   it('maker-net with VAT inside the commission deducts only the commission without VAT', () => {
-    // Derived from DESIGN.md "L − C at S = L, with no VAT in either": £100 − (£40 − £6.67).
+    // Derived from docs/money-rules.md "L − C at S = L, with no VAT in either": £100 − (£40 − £6.67).
     expect(insuranceValue(terms({ commissionVat: 'included' }), gbp(10000))).toEqual(gbp(6667));
   });
 

@@ -1,6 +1,6 @@
 import { markUp, money } from '@/shared/money';
 
-describe('markUp (TRADE-FACTS.md worked settlement "Mark-up ×2.2")', () => {
+describe('markUp (docs/money-rules.md worked example "Mark-up ×2.2", derived from HMRC VAT rates)', () => {
   it('maker’s price £100 × 2.2: retail £220, venue keeps £120 = £100 commission + £20 VAT', () => {
     // Rule: the VAT in what the venue keeps is the VAT fraction, 1/6 at 20% (HMRC).
     expect(markUp(money(10000, 'GBP'), 22000, { charged: true, rateBp: 2000 })).toEqual({

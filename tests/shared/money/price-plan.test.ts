@@ -15,7 +15,7 @@ import { amountArb, currencyArb, RUNS, termsArb } from './arbitraries';
 const gbp = (pounds: number) => money(pounds * 100, 'GBP');
 const terms = (changes: Partial<Terms>): Terms => ({ ...defaultTerms, ...changes });
 
-describe('planListPrice (DESIGN.md price planning)', () => {
+describe('planListPrice (docs/money-rules.md, price planning)', () => {
   it('40% commission: a wanted net of £60 needs a list price of £100', () => {
     expect(planListPrice(terms({}), gbp(60), gbp(1))).toEqual(gbp(100));
   });
@@ -84,7 +84,7 @@ describe('planListPrice (DESIGN.md price planning)', () => {
   });
 });
 
-describe('netsAcrossVenues (DESIGN.md: the same list price side by side)', () => {
+describe('netsAcrossVenues (docs/money-rules.md: the same list price side by side)', () => {
   it('shows what the maker nets at each venue for one list price', () => {
     const shop = terms({});
     const gallery = terms({ commissionRateBp: 5000, commissionVat: 'added' });

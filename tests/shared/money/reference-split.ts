@@ -1,7 +1,7 @@
 import { type Terms } from '@/shared/schemas/terms';
 
 /**
- * An independent restatement of DESIGN.md's split in BigInt rational arithmetic, for property
+ * An independent restatement of the split in docs/money-rules.md in BigInt rational arithmetic, for property
  * tests: each rule computed from its formula, half-up (VATREC12030), VAT never rounded to nil
  * (VAT Notice 700 17.5), the maker's share by subtraction; null when that share would be negative.
  */

@@ -5,7 +5,7 @@ import { insuranceValue, MoneyRuleError, splitSale, trySplitSale } from '@/share
 import { rateArb, RUNS, saleArb } from './arbitraries';
 import { referenceSplit } from './reference-split';
 
-/** Property tests of DESIGN.md's split rules over every terms combination and currency. */
+/** Property tests of the split rules in docs/money-rules.md over every terms combination and currency. */
 describe('splitSale properties', () => {
   it('commission (+ VAT when added) + maker share is exactly the price paid, or it is refused', () => {
     fc.assert(

@@ -19,9 +19,9 @@ const amounts = (split: ReturnType<typeof splitSale>) => ({
   makerReclaimableVat: split.makerReclaimableVat.amount,
 });
 
-describe('splitSale: TRADE-FACTS.md "Worked settlements"', () => {
+describe('splitSale: worked examples (docs/money-rules.md, from HMRC VAT rates and fractions)', () => {
   it('maker not registered, venue registered, 40% + VAT added, £100: £40 + £8, maker £52', () => {
-    // Rule: VAT on commission `added` V = v·C (DESIGN.md); 20% standard rate (HMRC).
+    // Rule: VAT on commission `added` V = v·C (docs/money-rules.md); 20% standard rate (HMRC).
     const split = splitSale(terms({ commissionVat: 'added' }), gbp(100), gbp(100));
     expect(amounts(split)).toEqual({
       commission: 4000,
@@ -68,7 +68,7 @@ describe('splitSale: TRADE-FACTS.md "Worked settlements"', () => {
   });
 });
 
-describe('splitSale: discount rules (DESIGN.md formulas), £100 listed, sold at £80, 40%', () => {
+describe('splitSale: discount rules (docs/money-rules.md formulas), £100 listed, sold at £80, 40%', () => {
   it('shared: commission on the actual price, r·S = £32', () => {
     const split = splitSale(terms({ discountRule: 'shared' }), gbp(100), gbp(80));
     expect([split.commission, split.makerShare]).toEqual([gbp(32), gbp(48)]);

@@ -18,7 +18,7 @@ const sold = (id: number, date: string, list: number, price = list): StatementLi
   sale: { date, price: gbp(price) },
 });
 
-describe('paymentDueDate (TRADE-FACTS.md trade practice: payment terms)', () => {
+describe('paymentDueDate (docs/money-rules.md; common practice: payment terms)', () => {
   it('30 days from the end of the month of sale: a sale on 15 Oct is due on 30 Nov', () => {
     expect(paymentDueDate({ days: 30, from: 'month-end' }, { saleDate: '2024-10-15' })).toBe(
       '2024-11-30',

@@ -129,7 +129,7 @@ describe('vatThresholdMonitor (HMRC: rolling 12 months at each month end, regist
   });
 });
 
-describe('saleTurnover (DESIGN.md; ICAEW FAQ on disclosed agents)', () => {
+describe('saleTurnover (docs/money-rules.md; ICAEW FAQ on disclosed agents)', () => {
   it('through an agent the whole sale price is the maker’s; on sale or return, what the venue pays', () => {
     const split = splitSale(defaultTerms, gbp(10000), gbp(10000));
     expect(saleTurnover(defaultTerms, gbp(10000), split)).toEqual(gbp(10000));

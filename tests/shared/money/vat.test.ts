@@ -7,7 +7,7 @@ import {
   vatOnNet,
 } from '@/shared/money';
 
-describe('VAT (TRADE-FACTS.md "VAT (United Kingdom)")', () => {
+describe('VAT (HMRC VAT rates, fractions and rounding; see docs/money-rules.md)', () => {
   it('£100 net + 20% = £120 gross; £100 at 5% = £105 (HMRC, VAT-exclusive prices)', () => {
     expect(grossFromNet(money(10000, 'GBP'), 2000)).toEqual(money(12000, 'GBP'));
     expect(grossFromNet(money(10000, 'GBP'), 500)).toEqual(money(10500, 'GBP'));
