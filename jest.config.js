@@ -13,6 +13,8 @@ const esmOnly = [
   'defu',
   'dinero.js',
   '@dinero.js',
+  'p-limit',
+  'yocto-queue',
 ];
 
 const alias = { '^@/(.*)$': '<rootDir>/$1' };

@@ -47,6 +47,7 @@ const codeByStatus: Record<number, ApiErrorCode> = {
   404: 'not_found',
   409: 'conflict',
   413: 'payload_too_large',
+  415: 'unsupported_media_type',
   429: 'too_many_requests',
 };
 
@@ -125,6 +126,7 @@ const fallbackMessages: Record<ClientErrorCode, string> = {
   not_found: 'That could not be found. It may have been removed.',
   conflict: 'Someone else changed this in the meantime. Reload and try again.',
   payload_too_large: 'That file is too large to send.',
+  unsupported_media_type: 'Saggar could not read what was sent. Reload the page and try again.',
   too_many_requests: 'Too many attempts in a short time. Wait a minute and try again.',
   internal: 'Something went wrong on our side. Try again in a moment.',
 };

@@ -11,6 +11,9 @@ export function createApp(context: AppContext): Express {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
+  // HSTS and upgrade-insecure-requests only behind HTTPS: a phone on the studio's own network
+  // must still reach a plain-HTTP install.
+  const https = context.publicUrl?.startsWith('https://') ?? false;
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -18,8 +21,10 @@ export function createApp(context: AppContext): Express {
           // react-native-web writes its styles into a <style> element at run time.
           'style-src': ["'self'", "'unsafe-inline'"],
           'img-src': ["'self'", 'data:', 'blob:'],
+          'upgrade-insecure-requests': https ? [] : null,
         },
       },
+      strictTransportSecurity: https,
     }),
   );
   app.use(

@@ -12,13 +12,15 @@ export type AppContext = {
   /** Serves everything outside /api: the exported web app, or Expo's dev server; null for none. */
   web: RequestHandler | null;
   trustedOrigins: readonly string[];
+  /** Where people reach the app, e.g. https://saggar.example; null on a plain local install. */
+  publicUrl: string | null;
   /** Where uploads live, by content hash: `<dataDir>/files` (a temporary folder in tests). */
   filesDir: string;
   /** Failed sign-ins allowed per client address in the window. */
   signInLimit: { max: number; windowMs: number };
 };
 
-export type ContextOptions = Omit<AppContext, 'auth' | 'signInLimit'> &
+export type ContextOptions = Omit<AppContext, 'auth' | 'signInLimit' | 'publicUrl'> &
   Pick<AuthOptions, 'secret'> &
   Partial<Pick<AuthOptions, 'publicUrl'>> &
   Partial<Pick<AppContext, 'signInLimit'>>;
@@ -28,6 +30,7 @@ export function createContext(options: ContextOptions): AppContext {
   return {
     signInLimit: { max: 10, windowMs: 15 * 60 * 1000 },
     ...rest,
+    publicUrl,
     auth: createAuth({
       db: options.db,
       logger: options.logger,

@@ -7,19 +7,31 @@ import { type ApiErrorBody } from '@/shared/schemas/api-error';
 
 import { HttpError } from './http-error';
 
-/** body-parser marks its errors with a `type`; these are the client's fault, not ours. */
-function fromBodyParser(err: unknown): HttpError | null {
-  const type = (err as { type?: unknown } | null)?.type;
+/**
+ * body-parser (and multer's busboy) raise http-errors with a 4xx `status` and `expose: true`:
+ * the client's fault, answered with the status they carry and a plain sentence.
+ */
+function fromClientError(err: unknown): HttpError | null {
+  const { status, expose, type } = (err ?? {}) as {
+    status?: unknown;
+    expose?: unknown;
+    type?: unknown;
+  };
+  if (typeof status !== 'number' || status < 400 || status > 499 || expose !== true) return null;
   if (type === 'entity.parse.failed') {
     return new HttpError('invalid_request', 'The request body is not valid JSON.');
   }
-  if (type === 'entity.too.large') {
-    return new HttpError('payload_too_large', 'The request body is too large.');
+  if (status === 413) return new HttpError('payload_too_large', 'The request body is too large.');
+  if (type === 'charset.unsupported') {
+    return new HttpError('unsupported_media_type', 'Send the request body as UTF-8 JSON.');
   }
-  if (typeof type === 'string' && type.startsWith('encoding.')) {
-    return new HttpError('invalid_request', 'The request body could not be read.');
+  if (status === 415) {
+    return new HttpError(
+      'unsupported_media_type',
+      'The request body’s Content-Encoding is not one the server reads: send it as is, or as gzip, deflate or br.',
+    );
   }
-  return null;
+  return new HttpError('invalid_request', 'The request body could not be read.');
 }
 
 export function toHttpError(err: unknown): HttpError {
@@ -37,7 +49,8 @@ export function toHttpError(err: unknown): HttpError {
     );
   }
   return (
-    fromBodyParser(err) ?? new HttpError('internal', 'Something went wrong on our side. Try again.')
+    fromClientError(err) ??
+    new HttpError('internal', 'Something went wrong on our side. Try again.')
   );
 }
 

@@ -8,6 +8,7 @@ const statusByCode: Record<ApiErrorCode, number> = {
   not_found: 404,
   conflict: 409,
   payload_too_large: 413,
+  unsupported_media_type: 415,
   too_many_requests: 429,
   internal: 500,
 };

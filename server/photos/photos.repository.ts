@@ -16,7 +16,7 @@ export async function fileIdFor(
       studio_id: scope.studioId,
       sha256: image.sha256,
       mime_type: image.mimeType,
-      byte_size: image.buffer.length,
+      byte_size: image.byteSize,
       original_name: originalName,
       width_px: image.widthPx,
       height_px: image.heightPx,
@@ -94,21 +94,98 @@ export async function reorderPhotos(
   await writePositions(db, photoIds);
 }
 
-/** Removes one photo and closes the gap, so the first one left is the cover. */
+/**
+ * Removes one photo and closes the gap, so the first one left is the cover. Answers the file it
+ * showed, or undefined when the work has no such photo.
+ */
 export async function removePhoto(
   db: Db,
   scope: Scope,
   workId: number,
   photoId: number,
-): Promise<boolean> {
-  const ids = await photoIdsOf(db, scope, workId);
-  if (!ids.includes(photoId)) return false;
+): Promise<number | undefined> {
+  const rows = await photoRowsOf(db, scope, workId);
+  const removed = rows.find((row) => row.id === photoId);
+  if (!removed) return undefined;
   await db.deleteFrom('work_photos').where('id', '=', photoId).execute();
   await writePositions(
     db,
-    ids.filter((id) => id !== photoId),
+    rows.filter((row) => row.id !== photoId).map((row) => row.id),
   );
-  return true;
+  return removed.file_id;
+}
+
+/** The files behind a work's photos. */
+export async function fileIdsOfWork(db: Db, scope: Scope, workId: number): Promise<number[]> {
+  return (await photoRowsOf(db, scope, workId)).map((p) => p.file_id);
+}
+
+/**
+ * Deletes those of the studio's files that nothing refers to any more (no work's photo, no
+ * condition finding) and answers their content hashes.
+ */
+export async function deleteUnusedFiles(
+  db: Db,
+  scope: Scope,
+  fileIds: readonly number[],
+): Promise<string[]> {
+  if (fileIds.length === 0) return [];
+  const unused = await scoped
+    .files(db, scope)
+    .select(['files.id', 'files.sha256'])
+    .where('files.id', 'in', fileIds)
+    .where(({ not, exists, selectFrom }) =>
+      not(
+        exists(
+          selectFrom('work_photos')
+            .select('work_photos.id')
+            .whereRef('work_photos.file_id', '=', 'files.id'),
+        ),
+      ),
+    )
+    .where(({ not, exists, selectFrom }) =>
+      not(
+        exists(
+          selectFrom('condition_findings')
+            .select('condition_findings.id')
+            .whereRef('condition_findings.photo_file_id', '=', 'files.id'),
+        ),
+      ),
+    )
+    .execute();
+  if (unused.length === 0) return [];
+  await db
+    .deleteFrom('files')
+    .where('files.studio_id', '=', scope.studioId)
+    .where(
+      'files.id',
+      'in',
+      unused.map((f) => f.id),
+    )
+    .execute();
+  return unused.map((f) => f.sha256);
+}
+
+/**
+ * Whether any studio still has a file with this content. Unscoped on purpose: the stored bytes
+ * are shared by every studio that uploaded the same picture.
+ */
+export async function contentStillReferenced(db: Db, sha256: string): Promise<boolean> {
+  const row = await db
+    .selectFrom('files')
+    .select('files.id')
+    .where('files.sha256', '=', sha256)
+    .executeTakeFirst();
+  return row !== undefined;
+}
+
+/** The work, if the scope may see it. */
+export async function findWorkId(db: Db, scope: Scope, workId: number) {
+  return scoped
+    .works(db, scope)
+    .select('works.id')
+    .where('works.id', '=', workId)
+    .executeTakeFirst();
 }
 
 /** The stored file behind a photo, if the scope may see the work it belongs to. */

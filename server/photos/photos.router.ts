@@ -37,7 +37,7 @@ export function workPhotosRouter({ db, filesDir }: AppContext) {
     })
     .delete('/:photoId', remove, async (_req, res) => {
       const { id, photoId } = remove.input(res).params;
-      res.json(await deletePhoto(db, scopeOf(res), id, photoId));
+      res.json(await deletePhoto(db, store, scopeOf(res), id, photoId));
     });
 }
 

@@ -1,6 +1,5 @@
 import { type WorkPhotos } from '@/shared/schemas/work';
 
-import { scoped } from '../access/scoped';
 import { type Scope } from '../access/viewer';
 import { type Db } from '../db/database';
 import { HttpError, notFound } from '../http/http-error';
@@ -8,19 +7,17 @@ import { listPhotosOf } from '../works/works.repository';
 import { type CheckedImage, checkImage, type PhotoStore } from './photo-store';
 import {
   appendPhotos,
+  contentStillReferenced,
+  deleteUnusedFiles,
   fileIdFor,
+  findWorkId,
   photoIdsOf,
   removePhoto,
   reorderPhotos,
 } from './photos.repository';
 
 async function assertWork(db: Db, scope: Scope, workId: number): Promise<void> {
-  const work = await scoped
-    .works(db, scope)
-    .select('works.id')
-    .where('works.id', '=', workId)
-    .executeTakeFirst();
-  if (!work) throw notFound('That work');
+  if (!(await findWorkId(db, scope, workId))) throw notFound('That work');
 }
 
 export async function listWorkPhotos(db: Db, scope: Scope, workId: number): Promise<WorkPhotos> {
@@ -36,23 +33,39 @@ export async function uploadPhotos(
   store: PhotoStore,
   scope: Scope,
   workId: number,
-  files: readonly { buffer: Buffer; originalname: string }[],
+  files: readonly { path: string; originalname: string }[],
 ): Promise<WorkPhotos> {
   await assertWork(db, scope, workId);
   if (files.length === 0) {
     throw new HttpError('invalid_request', 'Choose at least one photo to upload.');
   }
   const images: CheckedImage[] = [];
-  for (const file of files) images.push(await checkImage(file.buffer, file.originalname));
-  for (const image of images) await store.save(image);
-  await db.transaction().execute(async (trx) => {
-    const fileIds = [];
-    for (const [i, image] of images.entries()) {
-      fileIds.push(await fileIdFor(trx, scope, image, files[i]!.originalname));
-    }
-    await appendPhotos(trx, scope, workId, fileIds);
-  });
+  for (const file of files) images.push(await checkImage(file.path, file.originalname));
+  await store.keep(images, () =>
+    db.transaction().execute(async (trx) => {
+      await assertWork(trx, scope, workId);
+      const fileIds = [];
+      for (const [i, image] of images.entries()) {
+        fileIds.push(await fileIdFor(trx, scope, image, files[i]!.originalname));
+      }
+      await appendPhotos(trx, scope, workId, fileIds);
+    }),
+  );
   return listWorkPhotos(db, scope, workId);
+}
+
+/**
+ * After a change that may have left pictures unused: their rows are gone already (in the
+ * change's transaction); their stored files go once no studio has the same picture.
+ */
+export async function removeStoredContent(
+  db: Db,
+  store: PhotoStore,
+  hashes: readonly string[],
+): Promise<void> {
+  for (const sha256 of hashes) {
+    await store.removeUnless(sha256, () => contentStillReferenced(db, sha256));
+  }
 }
 
 /** The work's photos in a new order, cover first; the list must hold each of them once. */
@@ -78,15 +91,20 @@ export async function setPhotoOrder(
   return listWorkPhotos(db, scope, workId);
 }
 
+/** Removes one photo; its stored files go too once nothing refers to them. */
 export async function deletePhoto(
   db: Db,
+  store: PhotoStore,
   scope: Scope,
   workId: number,
   photoId: number,
 ): Promise<WorkPhotos> {
-  await db.transaction().execute(async (trx) => {
+  const unused = await db.transaction().execute(async (trx) => {
     await assertWork(trx, scope, workId);
-    if (!(await removePhoto(trx, scope, workId, photoId))) throw notFound('That photo');
+    const fileId = await removePhoto(trx, scope, workId, photoId);
+    if (fileId === undefined) throw notFound('That photo');
+    return deleteUnusedFiles(trx, scope, [fileId]);
   });
+  await removeStoredContent(db, store, unused);
   return listWorkPhotos(db, scope, workId);
 }

@@ -1,4 +1,8 @@
-import { type RequestHandler } from 'express';
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+
+import { type Request, type RequestHandler } from 'express';
 import multer from 'multer';
 
 import { HttpError } from '../http/http-error';
@@ -6,14 +10,40 @@ import { HttpError } from '../http/http-error';
 export const maxPhotoBytes = 15 * 1024 * 1024;
 export const maxPhotosPerUpload = 10;
 
+/**
+ * Uploads wait on disk, not in memory, so three people sending ten large photos each hold only
+ * the pictures being checked in memory (see `imageWork` in photo-store.ts).
+ */
+const incoming = path.join(os.tmpdir(), 'saggar-incoming');
+
 const upload = multer({
-  storage: multer.memoryStorage(),
-  limits: { fileSize: maxPhotoBytes, files: maxPhotosPerUpload, fields: 5 },
+  storage: multer.diskStorage({
+    destination: (_req, _file, done) =>
+      fs.mkdir(incoming, { recursive: true }, (err) => done(err ?? null, incoming)),
+  }),
+  limits: { fileSize: maxPhotoBytes, files: maxPhotosPerUpload, fields: 5, parts: 20 },
+  fileFilter: (_req, file, done) =>
+    unreadableName(file.originalname) ? done(badName()) : done(null, true),
 }).array('photos', maxPhotosPerUpload);
 
-/** multer's refusals in the API's error shape. */
+/** A file name with NUL or another control character is refused, not stored. */
+const unreadableName = (name: string) => /[\u0000-\u001f\u007f]/.test(name);
+const badName = () =>
+  new HttpError('invalid_request', 'A file name has characters that cannot be read. Rename it.');
+
+/** A failure of the disk rather than of the request: the server's fault, answered 500. */
+const isSystemError = (err: unknown) => typeof (err as { syscall?: unknown }).syscall === 'string';
+
+/**
+ * multer's and busboy's refusals in the API's error shape. busboy throws plain errors for a body
+ * it cannot parse (no boundary, a truncated body, a malformed part header, multipart/mixed):
+ * those are the client's, answered 400.
+ */
 function toUploadError(err: unknown): unknown {
-  if (!(err instanceof multer.MulterError)) return err;
+  if (err instanceof HttpError || isSystemError(err)) return err;
+  if (!(err instanceof multer.MulterError)) {
+    return new HttpError('invalid_request', 'The upload could not be read. Try again.');
+  }
   switch (err.code) {
     case 'LIMIT_FILE_SIZE':
       return new HttpError('payload_too_large', 'Each photo must be 15 MB or smaller.');
@@ -30,14 +60,23 @@ function toUploadError(err: unknown): unknown {
   }
 }
 
+/** multer writes part files before it fails; a refused request leaves none behind. */
+function removeReceived(req: Request): void {
+  for (const file of uploadedFiles(req)) {
+    if (file.path) fs.rm(file.path, { force: true }, () => undefined);
+  }
+}
+
 /**
- * Reads a multipart upload of photos (field `photos`) into memory. multer checks only sizes and
- * counts here; whether each file really is an image is sharp's job (photo-store.ts).
+ * Reads a multipart upload of photos (field `photos`) to temporary files. multer checks only
+ * sizes, counts and names; whether each file really is an image is sharp's job (photo-store.ts).
+ * The files are removed when the response ends, however it ends.
  */
 export const receivePhotos: RequestHandler = (req, res, next) => {
+  res.on('close', () => removeReceived(req));
   upload(req, res, (err?: unknown) => next(err ? toUploadError(err) : undefined));
 };
 
-export function uploadedFiles(req: Parameters<RequestHandler>[0]): Express.Multer.File[] {
+export function uploadedFiles(req: Request): Express.Multer.File[] {
   return Array.isArray(req.files) ? req.files : [];
 }

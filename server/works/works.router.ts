@@ -14,6 +14,7 @@ import { workImportRequestSchema } from '@/shared/schemas/work-import';
 import { requireRole, scopeOf } from '../access/authenticate';
 import { type AppContext } from '../context';
 import { validate } from '../http/validate';
+import { photoStore } from '../photos/photo-store';
 import { getStudio } from '../studio/studio.repository';
 import { worksToCsv } from './export/works-csv';
 import { commitImport, previewImport } from './import/works-import.service';
@@ -38,7 +39,8 @@ const byId = validate({ params: idParamsSchema });
 const update = validate({ params: idParamsSchema, body: workUpdateSchema });
 
 /** `/api/works`: the studio's catalogue, for the studio roles only (it carries cost prices). */
-export function worksRouter({ db }: AppContext) {
+export function worksRouter({ db, filesDir }: AppContext) {
+  const store = photoStore(filesDir);
   return (
     express
       .Router()
@@ -89,7 +91,7 @@ export function worksRouter({ db }: AppContext) {
         res.json(await setArchived(db, scopeOf(res), byId.input(res).params.id, false));
       })
       .delete('/:id', byId, async (_req, res) => {
-        await deleteWork(db, scopeOf(res), byId.input(res).params.id);
+        await deleteWork(db, store, scopeOf(res), byId.input(res).params.id);
         res.status(204).end();
       })
       .get('/:id/history', byId, async (_req, res) => {

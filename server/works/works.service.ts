@@ -10,6 +10,9 @@ import { type Scope } from '../access/viewer';
 import { writeAudit } from '../audit/audit-log.repository';
 import { type Db } from '../db/database';
 import { HttpError, notFound } from '../http/http-error';
+import { type PhotoStore } from '../photos/photo-store';
+import { deleteUnusedFiles, fileIdsOfWork } from '../photos/photos.repository';
+import { removeStoredContent } from '../photos/photos.service';
 import { getStudio } from '../studio/studio.repository';
 import { stockNumberAllocator } from './stock-numbers';
 import { toNewWorkRow, toWork, toWorkColumns } from './works.mapper';
@@ -150,9 +153,17 @@ export async function setArchived(
   return getWork(db, scope, id);
 }
 
-/** Deletes a work that has no history; one that has been consigned is kept and can be archived. */
-export async function deleteWork(db: Db, scope: Scope, id: number): Promise<void> {
-  await db.transaction().execute(async (trx) => {
+/**
+ * Deletes a work that has no history, and its pictures once nothing else shows them; one that has
+ * been consigned is kept and can be archived.
+ */
+export async function deleteWork(
+  db: Db,
+  store: PhotoStore,
+  scope: Scope,
+  id: number,
+): Promise<void> {
+  const unused = await db.transaction().execute(async (trx) => {
     const work = await findWorkRow(trx, scope, id);
     if (!work) throw notFound('That work');
     const record = await workHasRecord(trx, scope, id);
@@ -163,6 +174,9 @@ export async function deleteWork(db: Db, scope: Scope, id: number): Promise<void
           'so it stays in the catalogue for the record. Archive it instead to hide it from lists.',
       );
     }
+    const fileIds = await fileIdsOfWork(trx, scope, id);
     await deleteWorkRow(trx, scope, id);
+    return deleteUnusedFiles(trx, scope, fileIds);
   });
+  await removeStoredContent(db, store, unused);
 }

@@ -15,6 +15,7 @@ export const apiErrorCodes = [
   'not_found',
   'conflict',
   'payload_too_large',
+  'unsupported_media_type',
   'too_many_requests',
   'internal',
 ] as const;

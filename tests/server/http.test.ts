@@ -28,6 +28,18 @@ describe('GET /api/health', () => {
     expect(res.headers['content-security-policy']).toContain("default-src 'self'");
     expect(res.headers['x-powered-by']).toBeUndefined();
   });
+
+  it('asks browsers for HTTPS only when the public address is https://', async () => {
+    const plain = await request((await createTestApp()).app).get('/api/health');
+    expect(plain.headers['strict-transport-security']).toBeUndefined();
+    expect(plain.headers['content-security-policy']).not.toContain('upgrade-insecure-requests');
+
+    const secured = await request(
+      (await createTestApp({ publicUrl: 'https://saggar.example' })).app,
+    ).get('/api/health');
+    expect(secured.headers['strict-transport-security']).toMatch(/max-age=\d+/);
+    expect(secured.headers['content-security-policy']).toContain('upgrade-insecure-requests');
+  });
 });
 
 describe('unknown /api paths', () => {
@@ -98,6 +110,47 @@ describe('request bodies', () => {
     expect(res.body).toEqual({
       error: { code: 'payload_too_large', message: 'The request body is too large.' },
     });
+  });
+
+  it('answers 415 for a JSON body in a charset the server does not read', async () => {
+    const { app, cookie } = await owner();
+    const res = await request(app)
+      .put('/api/me/active-membership')
+      .set('Cookie', cookie)
+      .set('Content-Type', 'application/json; charset=ebcdic-cp-us')
+      .send('{"membershipId": 1}');
+    expect(res.status).toBe(415);
+    expect(res.body).toEqual({
+      error: { code: 'unsupported_media_type', message: 'Send the request body as UTF-8 JSON.' },
+    });
+  });
+
+  it('answers 415 for a Content-Encoding the server does not read', async () => {
+    const { app, cookie } = await owner();
+    const res = await request(app)
+      .put('/api/me/active-membership')
+      .set('Cookie', cookie)
+      .set('Content-Type', 'application/json')
+      .set('Content-Encoding', 'compress')
+      .send('{"membershipId": 1}');
+    expect(res.status).toBe(415);
+    expect(res.body.error.code).toBe('unsupported_media_type');
+  });
+
+  it('answers 400 for a body whose Content-Encoding does not decode', async () => {
+    const { app, cookie } = await owner();
+    for (const encoding of ['gzip', 'deflate', 'br']) {
+      const res = await request(app)
+        .put('/api/me/active-membership')
+        .set('Cookie', cookie)
+        .set('Content-Type', 'application/json')
+        .set('Content-Encoding', encoding)
+        .send(Buffer.from('this is not compressed at all'));
+      expect(res.status).toBe(400);
+      expect(res.body).toEqual({
+        error: { code: 'invalid_request', message: 'The request body could not be read.' },
+      });
+    }
   });
 
   it('answers 500 with a generic message when something unexpected fails', async () => {
