@@ -2,7 +2,7 @@ import express from 'express';
 
 import { requireRole, scopeOf } from '../access/authenticate';
 import { type AppContext } from '../context';
-import { getOverview } from './overview.repository';
+import { getOverview } from './overview.service';
 
 export function overviewRouter({ db }: AppContext) {
   return express

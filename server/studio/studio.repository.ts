@@ -1,11 +1,7 @@
-import { type StudioSettings } from '@/shared/schemas/studio';
-import { defaultTerms, type Terms, termsSchema } from '@/shared/schemas/terms';
-
 import { scoped } from '../access/scoped';
 import { type Scope } from '../access/viewer';
 import { type Db } from '../db/database';
 import { type StudioRow } from '../db/schema/studios';
-import { notFound } from '../http/http-error';
 
 export type Studio = Pick<
   StudioRow,
@@ -20,8 +16,8 @@ export type Studio = Pick<
   | 'default_terms'
 >;
 
-export async function getStudio(db: Db, scope: Scope): Promise<Studio> {
-  const studio = await scoped
+export async function findStudio(db: Db, scope: Scope): Promise<Studio | undefined> {
+  return scoped
     .studios(db, scope)
     .select([
       'studios.id',
@@ -35,8 +31,6 @@ export async function getStudio(db: Db, scope: Scope): Promise<Studio> {
       'studios.default_terms',
     ])
     .executeTakeFirst();
-  if (!studio) throw notFound('The studio');
-  return studio;
 }
 
 export async function updateStudio(
@@ -50,28 +44,4 @@ export async function updateStudio(
     .set({ ...columns, updated_at: new Date().toISOString() })
     .where('studios.id', '=', scope.studioId)
     .execute();
-}
-
-/** The terms a new venue starts from: the studio's own, or the product's in its currency. */
-export function studioDefaultTerms(studio: Studio): Terms {
-  if (studio.default_terms) return termsSchema.parse(JSON.parse(studio.default_terms));
-  return {
-    ...defaultTerms,
-    paymentTerms: { ...defaultTerms.paymentTerms },
-    currency: studio.currency,
-  };
-}
-
-export function toStudioSettings(studio: Studio, nextStockNumber: string): StudioSettings {
-  return {
-    id: studio.id,
-    name: studio.name,
-    currency: studio.currency,
-    locale: studio.locale,
-    timeZone: studio.time_zone,
-    vatNumber: studio.vat_number,
-    stockNumberPattern: studio.stock_number_pattern,
-    priceStep: studio.price_step,
-    nextStockNumber,
-  };
 }

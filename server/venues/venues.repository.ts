@@ -86,3 +86,12 @@ export async function listVenueStaff(db: Db, scope: Scope, venueId: number) {
     .orderBy(sql`users.name collate nocase`)
     .execute();
 }
+
+/** The venue a gallery member works for, with its studio's name: the venue side's heading. */
+export async function findVenueWithStudio(db: Db, scope: Scope) {
+  return scoped
+    .venues(db, scope)
+    .innerJoin('studios', 'studios.id', 'venues.studio_id')
+    .select(['venues.id', 'venues.name', 'studios.id as studio_id', 'studios.name as studio_name'])
+    .executeTakeFirst();
+}

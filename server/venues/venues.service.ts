@@ -10,7 +10,8 @@ import { type Scope } from '../access/viewer';
 import { listConsignmentSummaries } from '../consignments/consignments.repository';
 import { type Db } from '../db/database';
 import { notFound } from '../http/http-error';
-import { getStudio, studioDefaultTerms } from '../studio/studio.repository';
+import { studioDefaultTerms } from '../studio/studio.mapper';
+import { getStudio } from '../studio/studio.service';
 import { toVenue, toVenueDraft, toVenueRow } from './venues.mapper';
 import { findVenueRow, insertVenue, listVenueStaff, updateVenueRow } from './venues.repository';
 

@@ -1,5 +1,5 @@
 import { isoDateInTimeZone } from '@/shared/money';
-import { formatStockNumber, highestCounter, stockNumberGlob } from '@/shared/works/stock-number';
+import { stockNumberLike, stockNumberSequence } from '@/shared/works/stock-number';
 
 import { type Scope } from '../access/viewer';
 import { type Db } from '../db/database';
@@ -8,7 +8,7 @@ import { listStockNumbersLike } from './works.repository';
 
 /**
  * Hands out stock numbers from the studio's pattern for this year (in the studio's time zone),
- * one past the highest already used, including `alsoTaken` (numbers about to be inserted).
+ * after those already used, including `alsoTaken` (numbers about to be inserted).
  */
 export async function stockNumberAllocator(
   db: Db,
@@ -19,10 +19,6 @@ export async function stockNumberAllocator(
 ) {
   const pattern = studio.stock_number_pattern;
   const year = Number(isoDateInTimeZone(now, studio.time_zone).slice(0, 4));
-  const existing = await listStockNumbersLike(db, scope, stockNumberGlob(pattern, year));
-  let highest = highestCounter(pattern, year, [...existing, ...alsoTaken]);
-  return {
-    peek: () => formatStockNumber(pattern, year, highest + 1),
-    next: () => formatStockNumber(pattern, year, ++highest),
-  };
+  const existing = await listStockNumbersLike(db, scope, stockNumberLike(pattern, year));
+  return stockNumberSequence(pattern, year, [...existing, ...alsoTaken]);
 }

@@ -201,12 +201,12 @@ export async function listFacets(db: Db, scope: Scope) {
   };
 }
 
-/** Stock numbers of the studio that match an SQLite GLOB (see `stockNumberGlob`). */
-export async function listStockNumbersLike(db: Db, scope: Scope, glob: string) {
+/** Stock numbers of the studio that match a LIKE pattern (see `stockNumberLike`). */
+export async function listStockNumbersLike(db: Db, scope: Scope, like: string) {
   const rows = await scoped
     .works(db, scope)
     .select('works.stock_number')
-    .where(sql<SqlBool>`works.stock_number glob ${glob}`)
+    .where(sql<SqlBool>`works.stock_number like ${like} escape '\\'`)
     .execute();
   return rows.map((r) => r.stock_number);
 }
@@ -231,17 +231,25 @@ export async function stockNumbersTaken(
   return taken;
 }
 
-export async function insertWorks(db: Db, rows: readonly NewWorkRow[]): Promise<number[]> {
-  const ids: number[] = [];
+/**
+ * Inserts the rows, leaving out any whose stock number the studio already uses (a clash is an
+ * answer, not a failure, even when two requests race). Answers the ids inserted, by stock number.
+ */
+export async function insertWorks(
+  db: Db,
+  rows: readonly NewWorkRow[],
+): Promise<Map<string, number>> {
+  const inserted = new Map<string, number>();
   for (let i = 0; i < rows.length; i += 200) {
-    const inserted = await db
+    const chunk = await db
       .insertInto('works')
       .values(rows.slice(i, i + 200))
-      .returning('id')
+      .onConflict((oc) => oc.columns(['studio_id', 'stock_number']).doNothing())
+      .returning(['id', 'stock_number'])
       .execute();
-    ids.push(...inserted.map((r) => r.id));
+    for (const row of chunk) inserted.set(row.stock_number, row.id);
   }
-  return ids;
+  return inserted;
 }
 
 export async function updateWorkColumns(

@@ -14,17 +14,17 @@ import { workImportRequestSchema } from '@/shared/schemas/work-import';
 import { requireRole, scopeOf } from '../access/authenticate';
 import { type AppContext } from '../context';
 import { validate } from '../http/validate';
+import { writeBody } from '../http/write-body';
 import { photoStore } from '../photos/photo-store';
-import { getStudio } from '../studio/studio.repository';
-import { worksToCsv } from './export/works-csv';
+import { getStudio } from '../studio/studio.service';
 import { commitImport, previewImport } from './import/works-import.service';
 import { getWorkHistory } from './work-history.repository';
 import { listFacets } from './works.repository';
 import {
   createWork,
   deleteWork,
+  exportWorksCsv,
   getWork,
-  listAllWorks,
   listWorks,
   setArchived,
   updateWork,
@@ -54,15 +54,16 @@ export function worksRouter({ db, filesDir }: AppContext) {
       .get('/export.csv', exportCsv, async (_req, res) => {
         const scope = scopeOf(res);
         const query = exportCsv.input(res).query;
-        const works = await listAllWorks(db, scope, query);
         const studio = await getStudio(db, scope);
         const day = isoDateInTimeZone(new Date(), studio.time_zone);
         res
           .type('text/csv; charset=utf-8')
           .attachment(`works-${day}.csv`)
-          .set('Cache-Control', 'no-store')
-          // The byte-order mark tells spreadsheet programs the file is UTF-8.
-          .send(`\ufeff${worksToCsv(works)}`);
+          .set('Cache-Control', 'no-store');
+        // The byte-order mark tells spreadsheet programs the file is UTF-8.
+        await writeBody(res, '\ufeff');
+        await exportWorksCsv(db, scope, query, (chunk) => writeBody(res, chunk));
+        res.end();
       })
       .post('/import', importCsv, async (_req, res) => {
         const request = importCsv.input(res).body;

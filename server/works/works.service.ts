@@ -9,11 +9,14 @@ import {
 import { type Scope } from '../access/viewer';
 import { writeAudit } from '../audit/audit-log.repository';
 import { type Db } from '../db/database';
+import { isUniqueViolation } from '../db/errors';
 import { HttpError, notFound } from '../http/http-error';
 import { type PhotoStore } from '../photos/photo-store';
 import { deleteUnusedFiles, fileIdsOfWork } from '../photos/photos.repository';
 import { removeStoredContent } from '../photos/photos.service';
-import { getStudio } from '../studio/studio.repository';
+import { yieldToEventLoop } from '../runtime/slices';
+import { getStudio } from '../studio/studio.service';
+import { worksCsvHeader, worksCsvLines } from './export/works-csv';
 import { stockNumberAllocator } from './stock-numbers';
 import { toNewWorkRow, toWork, toWorkColumns } from './works.mapper';
 import {
@@ -34,10 +37,6 @@ export function stockNumberConflict(stockNumber: string): HttpError {
   return new HttpError('conflict', message, [{ path: ['stockNumber'], message }]);
 }
 
-/** SQLite's answer when the unique (studio, stock number) index refuses a row. */
-const isUniqueViolation = (err: unknown) =>
-  (err as { code?: unknown } | null)?.code === 'SQLITE_CONSTRAINT_UNIQUE';
-
 export async function listWorks(
   db: Db,
   scope: Scope,
@@ -55,14 +54,24 @@ export async function listWorks(
   return { items: rows.map((r) => toWork(r, photos.get(r.id) ?? [])), total };
 }
 
-/** Every work the filter selects, in order, without photos: what the CSV export writes. */
-export async function listAllWorks(
+/**
+ * Every work the filter selects, in order, written as CSV a page at a time: the response starts at
+ * once, memory stays flat, and other requests are answered between pages.
+ */
+export async function exportWorksCsv(
   db: Db,
   scope: Scope,
   query: WorkFilter & { sort: WorkSort },
-): Promise<Work[]> {
-  const rows = await listWorkRows(db, scope, query, query.sort);
-  return rows.map((r) => toWork(r, []));
+  write: (chunk: string) => Promise<void>,
+): Promise<void> {
+  await write(worksCsvHeader());
+  const pageSize = 500;
+  for (let page = 1; ; page += 1) {
+    const rows = await listWorkRows(db, scope, query, query.sort, { page, pageSize });
+    await write(worksCsvLines(rows.map((r) => toWork(r, []))));
+    if (rows.length < pageSize) return;
+    await yieldToEventLoop();
+  }
 }
 
 export async function getWork(db: Db, scope: Scope, id: number): Promise<Work> {
@@ -75,21 +84,40 @@ export async function getWork(db: Db, scope: Scope, id: number): Promise<Work> {
 /** A new work; without a stock number it gets the next one from the studio's pattern. */
 export async function createWork(db: Db, scope: Scope, input: WorkCreateParsed): Promise<Work> {
   const id = await db.transaction().execute(async (trx) => {
-    let stockNumber = input.stockNumber;
-    if (stockNumber === undefined) {
-      stockNumber = (await stockNumberAllocator(trx, scope, await getStudio(trx, scope))).next();
-    } else if ((await stockNumbersTaken(trx, scope, [stockNumber])).size > 0) {
-      throw stockNumberConflict(stockNumber);
-    }
-    try {
-      const [inserted] = await insertWorks(trx, [toNewWorkRow(input, scope.studioId, stockNumber)]);
-      return inserted!;
-    } catch (err) {
-      if (isUniqueViolation(err)) throw stockNumberConflict(stockNumber);
-      throw err;
-    }
+    const stockNumber =
+      input.stockNumber ??
+      (await stockNumberAllocator(trx, scope, await getStudio(trx, scope))).next();
+    const inserted = await insertWorks(trx, [toNewWorkRow(input, scope.studioId, stockNumber)]);
+    const id = inserted.get(stockNumber);
+    if (id === undefined) throw stockNumberConflict(stockNumber);
+    return id;
   });
   return getWork(db, scope, id);
+}
+
+/**
+ * A work's amounts share one currency: a change of currency comes with every amount in the new
+ * one (or the cost cleared), so a stored cost is never relabelled into another currency.
+ */
+function checkCurrencies(
+  before: { currency: string; cost_price: number | null },
+  input: WorkUpdateParsed,
+): void {
+  const currency = input.retailPrice?.currency ?? before.currency;
+  const fieldError = (path: string[], message: string) =>
+    new HttpError('invalid_request', 'Some fields need attention.', [{ path, message }]);
+  if (input.costPrice && input.costPrice.currency !== currency) {
+    throw fieldError(
+      ['costPrice', 'currency'],
+      'Enter the cost in the same currency as the retail price.',
+    );
+  }
+  if (currency !== before.currency && before.cost_price !== null && input.costPrice === undefined) {
+    throw fieldError(
+      ['costPrice'],
+      `The cost is in ${before.currency}. Enter it in ${currency} as well, or clear it, when the retail price changes currency.`,
+    );
+  }
 }
 
 /** Changes the fields sent; a change of retail price is written to the audit log. */
@@ -102,15 +130,7 @@ export async function updateWork(
   await db.transaction().execute(async (trx) => {
     const before = await findWorkRow(trx, scope, id);
     if (!before) throw notFound('That work');
-    const currency = input.retailPrice?.currency ?? before.currency;
-    if (input.costPrice && input.costPrice.currency !== currency) {
-      throw new HttpError('invalid_request', 'Some fields need attention.', [
-        {
-          path: ['costPrice', 'currency'],
-          message: 'Enter the cost in the same currency as the retail price.',
-        },
-      ]);
-    }
+    checkCurrencies(before, input);
     if (
       input.stockNumber !== undefined &&
       (await stockNumbersTaken(trx, scope, [input.stockNumber], id)).size > 0

@@ -1,5 +1,8 @@
 import { z } from 'zod';
 
+import { formatStockNumber, maxStockNumberLength } from '../works/stock-number';
+import { isSafeLine } from './text';
+
 /**
  * Stock-number patterns: `{YYYY}` or `{YY}` for the year, `{N…}` for a counter padded to as many
  * digits as there are Ns (`{YYYY}-{NNN}` gives 2026-007). Any other text is kept as written.
@@ -15,6 +18,13 @@ export const stockNumberPatternSchema = z
   })
   .refine((p) => !/\{(?!N+\}|YYYY\}|YY\})[^}]*\}/.test(p), {
     error: 'Use only {YYYY}, {YY} and {NNN} in braces.',
+  })
+  .refine(isSafeLine, {
+    error: 'The pattern has a hidden control or text-direction character; retype it without.',
+  })
+  // Room for the counter to grow four digits past its padding within the stock-number limit.
+  .refine((p) => formatStockNumber(p, 2026, 1n).length <= maxStockNumberLength - 4, {
+    error: `Shorten the pattern: its stock numbers must fit in ${maxStockNumberLength} characters.`,
   });
 
 /** `GET /api/studio`: the settings a work form needs. */

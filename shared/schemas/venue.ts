@@ -4,6 +4,7 @@ import { z } from 'zod';
 
 import { consignmentSummarySchema } from './consignment';
 import { termsSchema } from './terms';
+import { lineText, optionalText } from './text';
 
 export const venueKinds = ['gallery', 'shop', 'fair', 'exhibition', 'open-studio'] as const;
 export const venueKindSchema = z.enum(venueKinds, {
@@ -11,22 +12,8 @@ export const venueKindSchema = z.enum(venueKinds, {
 });
 export type VenueKind = z.infer<typeof venueKindSchema>;
 
-function optionalText(label: string, max: number) {
-  return z
-    .string({ error: `Enter the ${label} as text.` })
-    .trim()
-    .max(max, { error: `Keep the ${label} to ${max} characters or fewer.` })
-    .transform((v) => (v === '' ? null : v))
-    .nullable()
-    .optional();
-}
-
 const venueFields = {
-  name: z
-    .string({ error: 'Enter the venue’s name.' })
-    .trim()
-    .min(1, { error: 'Enter the venue’s name.' })
-    .max(200, { error: 'Keep the name to 200 characters or fewer.' }),
+  name: lineText('name', 200).min(1, { error: 'Enter the venue’s name.' }),
   kind: venueKindSchema,
   addressLine1: optionalText('address', 200),
   addressLine2: optionalText('address', 200),
@@ -50,7 +37,7 @@ const venueFields = {
   phone: optionalText('phone number', 40),
   vatNumber: optionalText('VAT number', 20),
   defaultTerms: termsSchema,
-  notes: optionalText('notes', 4000),
+  notes: optionalText('notes', 4000, 'lines'),
 };
 
 type VenueDraft = {

@@ -1,6 +1,8 @@
 import { z } from 'zod';
 
+import { maxStockNumberLength } from '../works/stock-number';
 import { moneySchema, priceSchema } from './money';
+import { lineText, optionalText } from './text';
 
 /**
  * Where a work is, derived from its latest consignment line (never stored on the work):
@@ -26,21 +28,6 @@ export type FoodUse = z.infer<typeof foodUseSchema>;
 /** Above this a piece carries a handling caution (UK HSE INDG143 guideline weight, 16 kg). */
 export const heavyWeightG = 16_000;
 
-function text(label: string, max: number) {
-  return z
-    .string({ error: `Enter the ${label} as text.` })
-    .trim()
-    .max(max, { error: `Keep the ${label} to ${max} characters or fewer.` });
-}
-
-/** Optional text: blank becomes null, so "cleared" and "never entered" are the same. */
-function optionalText(label: string, max: number) {
-  return text(label, max)
-    .transform((v) => (v === '' ? null : v))
-    .nullable()
-    .optional();
-}
-
 /** `unit` is the symbol after a figure (" mm"); `unitName` the word in a sentence ("millimetres"). */
 function wholeNumber(label: string, min: number, max: number, unit = '', unitName = '') {
   return z
@@ -54,10 +41,10 @@ function wholeNumber(label: string, min: number, max: number, unit = '', unitNam
 
 /** The fields a maker enters; only the title and the retail price are required. */
 const workFields = {
-  stockNumber: text('stock number', 40)
+  stockNumber: lineText('stock number', maxStockNumberLength)
     .min(1, { error: 'Enter a stock number, or leave it out to have one made for you.' })
     .optional(),
-  title: text('title', 200).min(1, { error: 'Enter a title.' }),
+  title: lineText('title', 200).min(1, { error: 'Enter a title.' }),
   year: wholeNumber('year', 1900, 2100),
   series: optionalText('series', 120),
   category: optionalText('category', 120),
@@ -73,8 +60,8 @@ const workFields = {
   retailPrice: z.strictObject(priceSchema.shape, { error: 'Enter the retail price.' }),
   costPrice: priceSchema.nullable().optional(),
   foodUse: foodUseSchema.optional(),
-  careNotes: optionalText('care notes', 2000),
-  notes: optionalText('notes', 4000),
+  careNotes: optionalText('care notes', 2000, 'lines'),
+  notes: optionalText('notes', 4000, 'lines'),
 };
 
 function sameCurrency(
@@ -163,10 +150,10 @@ export type WorkSort = z.infer<typeof workSortSchema>;
 
 /** `GET /api/works` query; numbers arrive as text in a URL. */
 export const workListQuerySchema = z.strictObject({
-  search: z.string().trim().max(200).optional(),
+  search: lineText('search', 200).optional(),
   status: workStatusSchema.optional(),
-  series: z.string().trim().max(120).optional(),
-  category: z.string().trim().max(120).optional(),
+  series: lineText('series', 120).optional(),
+  category: lineText('category', 120).optional(),
   venueId: z.coerce.number().int().positive().optional(),
   archived: z.enum(['exclude', 'include', 'only']).default('exclude'),
   sort: workSortSchema.default('stockNumber'),

@@ -1,8 +1,12 @@
 /**
  * Stock numbers from the studio's pattern (see `stockNumberPatternSchema`): `{YYYY}` or `{YY}`
  * for the year, `{N…}` for a counter padded to as many digits as there are Ns. Pure, so the
- * client can show the next number and the server can make it.
+ * client can show the next number and the server can make it. Counters are BigInts: a number
+ * typed by hand may carry any number of digits, and a float would turn 10^21 into "1e+21".
  */
+
+/** Long enough for any pattern's number, short enough for a shelf label. */
+export const maxStockNumberLength = 32;
 
 const token = /\{(YYYY|YY|N+)\}/g;
 
@@ -28,12 +32,12 @@ function yearText(year: number, digits: 4 | 2): string {
 }
 
 /** The stock number for one counter value: `{YYYY}-{NNN}`, 2026, 7 → `2026-007`. */
-export function formatStockNumber(pattern: string, year: number, counter: number): string {
+export function formatStockNumber(pattern: string, year: number, counter: bigint): string {
   return partsOf(pattern)
     .map((part) => {
       if ('literal' in part) return part.literal;
       if ('year' in part) return yearText(year, part.year);
-      return String(counter).padStart(part.counterDigits, '0');
+      return counter.toString().padStart(part.counterDigits, '0');
     })
     .join('');
 }
@@ -41,7 +45,7 @@ export function formatStockNumber(pattern: string, year: number, counter: number
 const escapeRegExp = (text: string) => text.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
 
 /** The counter in a stock number made by the pattern in that year, or null if it is not one. */
-export function counterOf(pattern: string, year: number, stockNumber: string): number | null {
+export function counterOf(pattern: string, year: number, stockNumber: string): bigint | null {
   const source = partsOf(pattern)
     .map((part) => {
       if ('literal' in part) return escapeRegExp(part.literal);
@@ -50,37 +54,59 @@ export function counterOf(pattern: string, year: number, stockNumber: string): n
     })
     .join('');
   const match = new RegExp(`^${source}$`).exec(stockNumber);
-  return match ? Number(match[1]) : null;
+  return match ? BigInt(match[1]!) : null;
 }
 
 /**
- * An SQLite GLOB that every stock number of the pattern in that year matches (and a few more,
- * which `counterOf` then leaves out), so the server reads only the candidates.
+ * A portable SQL LIKE pattern (with `\` as the escape character) that every stock number of the
+ * pattern in that year matches, and a few more, which `counterOf` then leaves out: the server
+ * reads only the candidates.
  */
-export function stockNumberGlob(pattern: string, year: number): string {
+export function stockNumberLike(pattern: string, year: number): string {
+  const escapeLike = (text: string) => text.replace(/[\\%_]/g, '\\$&');
   return partsOf(pattern)
     .map((part) => {
-      if ('literal' in part) return part.literal.replace(/[*?[]/g, '[$&]');
+      if ('literal' in part) return escapeLike(part.literal);
       if ('year' in part) return yearText(year, part.year);
-      return '*';
+      return '%';
     })
     .join('');
 }
 
-/** The highest counter already used with the pattern in that year; 0 when none is. */
-export function highestCounter(pattern: string, year: number, existing: Iterable<string>): number {
-  let highest = 0;
+/**
+ * Hands out stock numbers: one past the highest counter used with the pattern that year (so gaps
+ * left by deleted works are not refilled), starting at 1. When that would not fit in
+ * `maxStockNumberLength` (someone typed a number with a huge counter by hand), the lowest counter
+ * not yet used instead, so automatic numbering never stops and never repeats a number.
+ */
+export function stockNumberSequence(pattern: string, year: number, existing: Iterable<string>) {
+  const used = new Set<bigint>();
+  let highest = 0n;
   for (const stockNumber of existing) {
     const counter = counterOf(pattern, year, stockNumber);
-    if (counter !== null && counter > highest) highest = counter;
+    if (counter === null) continue;
+    used.add(counter);
+    if (counter > highest) highest = counter;
   }
-  return highest;
+  const format = (counter: bigint) => formatStockNumber(pattern, year, counter);
+  const choose = (): bigint => {
+    if (format(highest + 1n).length <= maxStockNumberLength) return highest + 1n;
+    let counter = 1n;
+    while (used.has(counter)) counter += 1n;
+    return counter;
+  };
+  return {
+    peek: () => format(choose()),
+    next: () => {
+      const counter = choose();
+      used.add(counter);
+      if (counter > highest) highest = counter;
+      return format(counter);
+    },
+  };
 }
 
-/**
- * The next stock number: one past the highest counter already used with the pattern in that
- * year (so gaps left by deleted works are not refilled), starting at 1.
- */
+/** The next stock number the pattern gives in that year after the existing ones. */
 export function nextStockNumber(pattern: string, year: number, existing: Iterable<string>): string {
-  return formatStockNumber(pattern, year, highestCounter(pattern, year, existing) + 1);
+  return stockNumberSequence(pattern, year, existing).peek();
 }

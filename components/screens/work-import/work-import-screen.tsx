@@ -14,12 +14,17 @@ import { TextLink } from '@/components/ui/text-link';
 import { spacing } from '@/constants/theme';
 import { errorMessage } from '@/hooks/api-client';
 import { useWorkImportCommitMutation, useWorkImportPreviewMutation } from '@/hooks/queries/works';
-import { type ImportField, importFieldLabels, importFields } from '@/shared/schemas/work-import';
+import {
+  type ImportColumn,
+  importColumnLabels,
+  importColumns,
+  maxImportRows,
+} from '@/shared/schemas/work-import';
 
 import { ImportRows } from './import-rows';
 import { chooseCsvFile, type ChosenCsv } from './read-csv-file';
 
-type Mapping = Partial<Record<ImportField, string>>;
+type Mapping = Partial<Record<ImportColumn, string>>;
 
 /** Choose a CSV, see every row checked and how columns map, then import the good rows or nothing. */
 export function WorkImportScreen() {
@@ -70,7 +75,8 @@ export function WorkImportScreen() {
         <TextLink href="/works" label="All works" />
         <Heading level={1}>Import works from CSV</Heading>
         <Text variant="small">
-          Save the spreadsheet as CSV with a header row. Prices are in the studio’s currency, with a
+          Save the spreadsheet as CSV with a header row, up to{' '}
+          {maxImportRows.toLocaleString('en-GB')} rows. Prices are in the studio’s currency, with a
           decimal point (12.50). Nothing is written until you press Import; duplicate stock numbers
           are reported, not merged.
         </Text>
@@ -82,10 +88,11 @@ export function WorkImportScreen() {
         <Card testID="import-done">
           <Heading level={2}>{`${counted(commit.data.imported, 'work')} imported`}</Heading>
           <Text testID="import-done-summary">
-            {commit.data.skipped.length === 0
+            {commit.data.skippedCount === 0
               ? 'Every row was imported.'
-              : `${counted(commit.data.skipped.length, 'row')} skipped because of the problems shown.`}
+              : `${counted(commit.data.skippedCount, 'row')} skipped because of the problems below.`}
           </Text>
+          {commit.data.skippedCount > 0 ? <ImportRows rows={commit.data.skipped} /> : null}
           <View style={styles.row}>
             <Link href="/works" asChild>
               <Button testID="import-to-works" label="See the works" />
@@ -122,7 +129,7 @@ export function WorkImportScreen() {
           <Card style={styles.stack}>
             <Heading level={2}>{file.name}</Heading>
             <Text testID="import-summary">
-              {`${data.rows.length} rows: ${data.validCount} ready to import, ${data.errorCount} with problems.`}
+              {`${counted(data.rowCount, 'row')}: ${data.validCount} ready to import, ${data.errorCount} with problems.`}
             </Text>
           </Card>
 
@@ -132,11 +139,11 @@ export function WorkImportScreen() {
               Which column of the file fills each field. Change one and check again.
             </Text>
             <View style={styles.mapping}>
-              {importFields.map((field) => (
+              {importColumns.map((field) => (
                 <View key={field} style={styles.mapSlot}>
                   <Select
                     testID={`import-map-${field}`}
-                    label={importFieldLabels[field]}
+                    label={importColumnLabels[field]}
                     emptyLabel="Not imported"
                     options={columns.map((c) => ({ value: c, label: c }))}
                     value={mapping?.[field] ?? ''}
@@ -167,6 +174,11 @@ export function WorkImportScreen() {
 
           <View style={styles.stack}>
             <Heading level={2}>Rows</Heading>
+            {data.rows.length < data.rowCount ? (
+              <Text variant="small" testID="import-rows-shown">
+                {`Showing ${data.rows.length} of ${data.rowCount} rows: the first ones ready to import and the first ones with a problem.`}
+              </Text>
+            ) : null}
             <ImportRows rows={data.rows} />
           </View>
 

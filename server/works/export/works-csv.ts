@@ -22,18 +22,21 @@ const columns: [string, (work: Work) => Cell][] = [
   ['Archived at', (work) => work.archivedAt],
 ];
 
+// papaparse's own `true` tests /^[=+\-@\t\r].*$/, which a cell with a line break escapes.
+const csvOptions = { escapeFormulae: /^[=+\-@\t\r]/, newline: '\r\n' } as const;
+
+/** The header line of the catalogue's CSV, with its line break. */
+export function worksCsvHeader(): string {
+  return `${Papa.unparse([columns.map(([header]) => header)], csvOptions)}\r\n`;
+}
+
 /**
- * The catalogue as CSV (RFC 4180 quoting by papaparse), prices in major units. Cells that a
- * spreadsheet would run as a formula (=, +, -, @) are prefixed with an apostrophe, which the
- * import takes off again.
+ * Works as CSV lines (RFC 4180 quoting by papaparse), each ending in a line break, prices in major
+ * units. Cells that a spreadsheet would run as a formula (=, +, -, @) are prefixed with an
+ * apostrophe, which the import takes off again.
  */
-export function worksToCsv(works: readonly Work[]): string {
-  return Papa.unparse(
-    {
-      fields: columns.map(([header]) => header),
-      data: works.map((work) => columns.map(([, cell]) => cell(work) ?? '')),
-    },
-    // papaparse's own `true` tests /^[=+\-@\t\r].*$/, which a cell with a line break escapes.
-    { escapeFormulae: /^[=+\-@\t\r]/, newline: '\r\n' },
-  );
+export function worksCsvLines(works: readonly Work[]): string {
+  if (works.length === 0) return '';
+  const data = works.map((work) => columns.map(([, cell]) => cell(work) ?? ''));
+  return `${Papa.unparse(data, csvOptions)}\r\n`;
 }

@@ -1,6 +1,6 @@
 import { parseDecimalAmount } from '@/shared/money';
 import { type WorkCreateParsed, workCreateSchema } from '@/shared/schemas/work';
-import { type ImportField } from '@/shared/schemas/work-import';
+import { type ImportColumn, type ImportField } from '@/shared/schemas/work-import';
 
 export type RowError = { field: string; message: string };
 
@@ -25,15 +25,24 @@ const foodUses: Record<string, string> = {
 
 /**
  * One CSV row as the create form would send it, checked with the same `workCreateSchema`.
- * Blank cells are left out; prices are major units in the studio's currency.
+ * Blank cells are left out; prices are major units in the studio's currency, and a row whose
+ * currency column names another currency is refused rather than relabelled.
  */
 export function parseImportRow(
-  values: Partial<Record<ImportField, string>>,
+  values: Partial<Record<ImportColumn, string>>,
   currency: string,
 ): { work: WorkCreateParsed | null; errors: RowError[] } {
   const errors: RowError[] = [];
   const candidate: Record<string, unknown> = {};
-  for (const [field, raw] of Object.entries(values) as [ImportField, string][]) {
+  const { currency: rowCurrency, ...fields } = values;
+  const stated = rowCurrency?.trim().toUpperCase() ?? '';
+  if (stated !== '' && stated !== currency) {
+    errors.push({
+      field: 'currency',
+      message: `This row is in ${stated}; the studio’s works are in ${currency}. Convert its prices, or leave it out.`,
+    });
+  }
+  for (const [field, raw] of Object.entries(fields) as [ImportField, string][]) {
     const text = raw.trim();
     if (text === '') continue;
     if (field === 'retailPrice' || field === 'costPrice') {

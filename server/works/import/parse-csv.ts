@@ -1,12 +1,20 @@
 import Papa from 'papaparse';
 
-import { type ImportField, importFieldLabels, importFields } from '@/shared/schemas/work-import';
+import {
+  type ImportColumn,
+  importColumnLabels,
+  importColumns,
+  maxImportRows,
+} from '@/shared/schemas/work-import';
 
 import { HttpError } from '../../http/http-error';
 
 export type CsvRecord = { rowNumber: number; cells: string[]; parseError: string | null };
 
-/** Header row and records; row numbers count the header as row 1, as a spreadsheet shows it. */
+/**
+ * Header row and records; row numbers count the header as row 1, as a spreadsheet shows it. A
+ * file over `maxImportRows` is refused whole, with the limit said.
+ */
 export function parseCsv(csv: string): { columns: string[]; records: CsvRecord[] } {
   const parsed = Papa.parse<string[]>(csv, { header: false, skipEmptyLines: false });
   const [header = [], ...rows] = parsed.data;
@@ -22,6 +30,12 @@ export function parseCsv(csv: string): { columns: string[]; records: CsvRecord[]
     }))
     // Blank lines (a trailing newline, a spacer row) are not works.
     .filter((r) => r.cells.some((c) => c.trim() !== ''));
+  if (records.length > maxImportRows) {
+    const message =
+      `The file has ${records.length.toLocaleString('en-GB')} rows; an import takes at most ` +
+      `${maxImportRows.toLocaleString('en-GB')}. Split it into smaller files.`;
+    throw new HttpError('invalid_request', message, [{ path: ['csv'], message }]);
+  }
   return { columns: header.map((h) => h.trim()), records };
 }
 
@@ -31,7 +45,7 @@ const unescapeFormula = (cell: string) => (/^'[=+\-@\t\r]/.test(cell) ? cell.sli
 const normalise = (name: string) => name.toLowerCase().replace(/[^a-z0-9]/g, '');
 
 /** A few headers makers commonly use for a field, besides its name and label. */
-const aliases: Partial<Record<ImportField, string[]>> = {
+const aliases: Partial<Record<ImportColumn, string[]>> = {
   stockNumber: ['stock', 'stockno', 'ref', 'reference', 'sku'],
   retailPrice: ['price', 'retail'],
   costPrice: ['cost'],
@@ -41,6 +55,7 @@ const aliases: Partial<Record<ImportField, string[]>> = {
   heightMm: ['height'],
   widthMm: ['width'],
   depthMm: ['depth'],
+  currency: ['currencycode', 'ccy'],
 };
 
 /**
@@ -49,8 +64,8 @@ const aliases: Partial<Record<ImportField, string[]>> = {
  */
 export function resolveMapping(
   columns: readonly string[],
-  mapping: Partial<Record<ImportField, string>> | undefined,
-): Partial<Record<ImportField, string>> {
+  mapping: Partial<Record<ImportColumn, string>> | undefined,
+): Partial<Record<ImportColumn, string>> {
   if (mapping) {
     const issues = Object.entries(mapping)
       .filter(([, header]) => !columns.includes(header))
@@ -63,10 +78,10 @@ export function resolveMapping(
     }
     return mapping;
   }
-  const resolved: Partial<Record<ImportField, string>> = {};
+  const resolved: Partial<Record<ImportColumn, string>> = {};
   const used = new Set<string>();
-  for (const field of importFields) {
-    const names = [field, importFieldLabels[field], ...(aliases[field] ?? [])].map(normalise);
+  for (const field of importColumns) {
+    const names = [field, importColumnLabels[field], ...(aliases[field] ?? [])].map(normalise);
     const header = columns.find((c) => !used.has(c) && names.includes(normalise(c)));
     if (header !== undefined) {
       resolved[field] = header;

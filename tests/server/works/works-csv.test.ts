@@ -111,7 +111,13 @@ describe('GET /api/works/export.csv', () => {
       .post('/api/works/import')
       .set(await as(f, 'otherOwner'))
       .send({ mode: 'commit', csv });
-    expect(res.body).toEqual({ mode: 'commit', imported: 1, skipped: [] });
+    expect(res.body).toEqual({
+      mode: 'commit',
+      imported: 1,
+      skippedCount: 0,
+      skipped: [],
+      problems: [],
+    });
     const back = await request(f.app)
       .get('/api/works')
       .set(await as(f, 'otherOwner'));
@@ -168,6 +174,7 @@ describe('POST /api/works/import', () => {
     expect(res.status).toBe(200);
     expect(res.body).toEqual({
       mode: 'preview',
+      rowCount: 7,
       columns: ['Stock number', 'Title', 'Price', 'Year', 'Food use', 'Weight'],
       mapping: {
         stockNumber: 'Stock number',
@@ -236,6 +243,40 @@ describe('POST /api/works/import', () => {
       ],
       validCount: 1,
       errorCount: 6,
+      problems: [
+        {
+          field: 'stockNumber',
+          message: 'The stock number P-1 is also on row 6 of the file.',
+          rowNumbers: [2],
+        },
+        { field: 'title', message: 'Enter a title.', rowNumbers: [3] },
+        {
+          field: 'retailPrice',
+          message: 'Enter the price in GBP as a number such as 12.50, not “twelve”.',
+          rowNumbers: [4],
+        },
+        { field: 'year', message: 'The year must be at least 1900.', rowNumbers: [4] },
+        {
+          field: 'weightG',
+          message: 'Enter the weight as a whole number of grams.',
+          rowNumbers: [5],
+        },
+        {
+          field: 'foodUse',
+          message: 'Choose food-safe, decorative only, or not stated.',
+          rowNumbers: [5],
+        },
+        {
+          field: 'stockNumber',
+          message: 'The stock number P-1 is also on row 2 of the file.',
+          rowNumbers: [6],
+        },
+        {
+          field: 'stockNumber',
+          message: 'The stock number OLD-1 is already used by a work in the catalogue.',
+          rowNumbers: [7],
+        },
+      ],
     });
     expect(await f.db.selectFrom('works').select('stock_number').execute()).toEqual([
       { stock_number: 'OLD-1' },
@@ -263,6 +304,7 @@ describe('POST /api/works/import', () => {
     expect(res.body).toEqual({
       mode: 'commit',
       imported: 2,
+      skippedCount: 1,
       skipped: [
         {
           rowNumber: 4,
@@ -271,6 +313,7 @@ describe('POST /api/works/import', () => {
           errors: [{ field: 'title', message: 'Enter a title.' }],
         },
       ],
+      problems: [{ field: 'title', message: 'Enter a title.', rowNumbers: [4] }],
     });
     const year = new Date().getUTCFullYear();
     const rows = await f.db
