@@ -10,7 +10,7 @@ import { mountApi } from './routes';
 export function createApp(context: AppContext): Express {
   const app = express();
   app.disable('x-powered-by');
-  app.set('trust proxy', 'loopback');
+  app.set('trust proxy', context.trustProxy);
   // HSTS and upgrade-insecure-requests only behind HTTPS: a phone on the studio's own network
   // must still reach a plain-HTTP install.
   const https = context.publicUrl?.startsWith('https://') ?? false;

@@ -19,7 +19,18 @@ export function readConfig(env: NodeJS.ProcessEnv = process.env) {
     publicUrl: env.SAGGAR_PUBLIC_URL ?? null,
     authSecret: env.SAGGAR_AUTH_SECRET ?? localSecret(dataDir),
     logLevel: env.LOG_LEVEL ?? 'info',
+    trustProxy: trustProxySetting(env.SAGGAR_TRUST_PROXY),
   };
+}
+
+/**
+ * Which proxy's X-Forwarded-For to believe: none unless SAGGAR_TRUST_PROXY names it, as Express's
+ * `trust proxy` takes it (a number of hops, or addresses and subnets such as `loopback` or
+ * `10.0.0.0/8`). Believing it from anyone would let a client pick its own address.
+ */
+function trustProxySetting(value: string | undefined): boolean | string | number {
+  if (value === undefined || value.trim() === '') return false;
+  return /^\d+$/.test(value.trim()) ? Number(value) : value.trim();
 }
 export type Config = ReturnType<typeof readConfig>;
 

@@ -1,6 +1,7 @@
 import { type RequestHandler } from 'express';
 import { type Logger } from 'pino';
 
+import { sessionCookieName } from './access/session-cookie';
 import { type AuthOptions, createAuth } from './auth/auth';
 import { type Db } from './db/database';
 
@@ -16,21 +17,36 @@ export type AppContext = {
   publicUrl: string | null;
   /** Where uploads live, by content hash: `<dataDir>/files` (a temporary folder in tests). */
   filesDir: string;
-  /** Failed sign-ins allowed per client address in the window. */
-  signInLimit: { max: number; windowMs: number };
+  /**
+   * Sign-in attempts allowed in the window, per account and per client address. The address's is
+   * the higher, so staff sharing one address are not locked out by one person's mistakes.
+   */
+  signInLimit: { perAccount: number; perAddress: number; windowMs: number };
+  /** The session cookie's name and the secret that signs it. */
+  sessionCookie: { name: string; secret: string };
+  /** Express's `trust proxy`: false unless SAGGAR_TRUST_PROXY names the proxy in front. */
+  trustProxy: boolean | string | number;
 };
 
-export type ContextOptions = Omit<AppContext, 'auth' | 'signInLimit' | 'publicUrl'> &
+export type ContextOptions = Omit<
+  AppContext,
+  'auth' | 'signInLimit' | 'publicUrl' | 'sessionCookie' | 'trustProxy'
+> &
   Pick<AuthOptions, 'secret'> &
   Partial<Pick<AuthOptions, 'publicUrl'>> &
-  Partial<Pick<AppContext, 'signInLimit'>>;
+  Partial<Pick<AppContext, 'signInLimit' | 'trustProxy'>>;
 
 export function createContext(options: ContextOptions): AppContext {
   const { secret, publicUrl = null, ...rest } = options;
   return {
-    signInLimit: { max: 10, windowMs: 15 * 60 * 1000 },
+    signInLimit: { perAccount: 10, perAddress: 50, windowMs: 15 * 60 * 1000 },
+    trustProxy: false,
     ...rest,
     publicUrl,
+    sessionCookie: {
+      name: sessionCookieName(publicUrl?.startsWith('https://') ?? false),
+      secret,
+    },
     auth: createAuth({
       db: options.db,
       logger: options.logger,

@@ -24,6 +24,7 @@ async function main() {
     web: config.webDevUrl ? await devWebProxy(config.webDevUrl) : webApp(config.webRoot),
     trustedOrigins: config.trustedOrigins,
     filesDir: config.filesDir,
+    trustProxy: config.trustProxy,
   });
   const app = createApp(context);
 

@@ -1,12 +1,11 @@
-import { toNodeHandler } from 'better-auth/node';
 import express, { type Express } from 'express';
 
-import { authenticate, requireRole, requireSignedIn } from './access/authenticate';
+import { authenticate, requireRole } from './access/authenticate';
+import { authRouter } from './auth/auth.router';
 import { type AppContext } from './context';
 import { healthRouter } from './health/health.router';
 import { apiNotFound } from './http/error-handler';
 import { sameOrigin } from './http/same-origin';
-import { signInLimit } from './http/sign-in-limit';
 import { meRouter } from './me/me.router';
 import { overviewRouter } from './overview/overview.router';
 import { photoFilesRouter, workPhotosRouter } from './photos/photos.router';
@@ -18,25 +17,22 @@ import { worksRouter } from './works/works.router';
 
 /** Every API route, one line each. Order matters only where a comment says so. */
 export function mountApi(app: Express, context: AppContext): void {
-  const authHandler = toNodeHandler(context.auth);
+  const resolveViewer = authenticate(context);
 
   app.use('/api', sameOrigin(context.trustedOrigins));
   app.use('/api/health', healthRouter);
 
-  // better-auth reads the raw body itself, so its routes come before express.json(). Only the
-  // endpoints the product uses are exposed; the rest of /api/auth answers 404.
-  app.post('/api/auth/sign-in/email', signInLimit(context), authHandler);
-  app.post('/api/auth/sign-out', authenticate(context), requireSignedIn, authHandler);
+  app.use('/api/auth', authRouter(context, resolveViewer));
 
   // A CSV import is up to 2 MB of text, JSON-escaped: more than the global limit. Read here,
   // only for the studio roles, the body is then skipped by the global parser below.
   app.post(
     '/api/works/import',
-    authenticate(context),
+    resolveViewer,
     requireRole('owner', 'assistant'),
     express.json({ limit: '6mb' }),
   );
-  app.use('/api', express.json({ limit: '100kb' }), authenticate(context));
+  app.use('/api', express.json({ limit: '100kb' }), resolveViewer);
   app.use('/api/me', meRouter(context));
   app.use('/api/overview', overviewRouter(context));
   app.use('/api/venue', venueHomeRouter(context));

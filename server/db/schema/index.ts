@@ -8,6 +8,7 @@ import { type MembershipsTable } from './memberships';
 import { type OutboxTable } from './outbox';
 import { type PaymentsTable } from './payments';
 import { type SessionsTable } from './sessions';
+import { type SignInLimitsTable } from './sign-in-limits';
 import { type StatementLinesTable, type StatementsTable } from './statements';
 import { type StudiosTable } from './studios';
 import { type UsersTable } from './users';
@@ -36,4 +37,5 @@ export interface Database {
   payments: PaymentsTable;
   outbox: OutboxTable;
   audit_log: AuditLogTable;
+  sign_in_limits: SignInLimitsTable;
 }

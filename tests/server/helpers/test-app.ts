@@ -7,7 +7,7 @@ import request from 'supertest';
 
 import { createApp } from '@/server/app';
 import { createUserWithPassword } from '@/server/auth/passwords';
-import { createContext } from '@/server/context';
+import { type AppContext, createContext } from '@/server/context';
 import { openDatabase } from '@/server/db/database';
 import { migrateToLatest } from '@/server/db/migrate';
 import { addMembership } from '@/server/memberships/memberships.repository';
@@ -20,7 +20,7 @@ export const password = 'correct horse battery staple';
 
 /** The real app over a fresh in-memory database migrated to latest. */
 export async function createTestApp(
-  options: { signInLimit?: { max: number; windowMs: number }; publicUrl?: string } = {},
+  options: Partial<Pick<AppContext, 'signInLimit' | 'trustProxy'>> & { publicUrl?: string } = {},
 ) {
   const db = openDatabase(':memory:');
   await migrateToLatest(db);
