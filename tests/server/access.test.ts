@@ -1,6 +1,7 @@
 import request from 'supertest';
 
-import { protectedRoutes } from './helpers/routes';
+import { mountedRoutes } from './helpers/mounted-routes';
+import { callable, protectedRoutes, publicRoutes } from './helpers/routes';
 import {
   addConsignment,
   addPerson,
@@ -30,13 +31,23 @@ async function twoStudios() {
   return { ...ctx, studioA, studioB, venueA, venueB, consignmentA, draftA, consignmentB };
 }
 
-const call = (app: Parameters<typeof request>[0], route: (typeof protectedRoutes)[number]) =>
-  request(app)
-    [route.method](route.path)
-    .send(route.method === 'get' ? undefined : {});
+const call = (app: Parameters<typeof request>[0], entry: (typeof protectedRoutes)[number]) => {
+  const { method, path } = callable(entry.route);
+  return request(app)
+    [method](path)
+    .send(method === 'get' ? undefined : {});
+};
+
+describe('the table of routes the access tests check', () => {
+  it('lists every route Express has mounted, and nothing it has not', async () => {
+    const { app } = await createTestApp();
+    const listed = [...publicRoutes, ...protectedRoutes.map((r) => r.route)].sort();
+    expect(mountedRoutes(app)).toEqual(listed);
+  });
+});
 
 describe('every protected /api route', () => {
-  it.each(protectedRoutes)('$method $path answers 401 without a session', async (route) => {
+  it.each(protectedRoutes)('$route answers 401 without a session', async (route) => {
     const { app } = await createTestApp();
     const res = await call(app, route);
     expect(res.status).toBe(401);
@@ -46,7 +57,7 @@ describe('every protected /api route', () => {
   });
 
   it.each(protectedRoutes.filter((r) => !r.roles.includes('gallery')))(
-    '$method $path answers 403 to the gallery role',
+    '$route answers 403 to the gallery role',
     async (route) => {
       const { app } = await twoStudios();
       const cookie = await signIn(app, 'gallery-a@example.test');
@@ -59,7 +70,7 @@ describe('every protected /api route', () => {
   );
 
   it.each(protectedRoutes.filter((r) => !r.roles.includes('owner')))(
-    '$method $path answers 403 to the studio roles',
+    '$route answers 403 to the studio roles',
     async (route) => {
       const { app } = await twoStudios();
       for (const email of ['owner-a@example.test', 'assistant-a@example.test']) {
@@ -173,8 +184,8 @@ describe('a gallery member of one studio', () => {
   it('reads nothing of another studio anywhere it may go', async () => {
     const { app } = await twoStudios();
     const cookie = await signIn(app, 'gallery-a@example.test');
-    for (const route of protectedRoutes.filter((r) => r.method === 'get')) {
-      const res = await request(app).get(route.path).set('Cookie', cookie);
+    for (const { route } of protectedRoutes.filter((r) => r.route.startsWith('GET '))) {
+      const res = await request(app).get(callable(route).path).set('Cookie', cookie);
       expect(JSON.stringify(res.body)).not.toMatch(/Studio B|Gallery of B|B-1/);
     }
   });
