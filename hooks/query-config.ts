@@ -1,6 +1,6 @@
 import { QueryClient } from '@tanstack/react-query';
 
-import { isRetryable } from './api-client';
+import { isRetryable } from './api-errors';
 
 const second = 1000;
 const minute = 60 * second;

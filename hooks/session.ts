@@ -4,7 +4,8 @@ import { type Href } from 'expo-router';
 import { type Membership } from '@/shared/schemas/membership';
 import { type Me, meSchema, type SignIn } from '@/shared/schemas/session';
 
-import { ApiError, apiRequest } from './api-client';
+import { apiRequest } from './api-client';
+import { ApiError } from './api-errors';
 import { staleTimes } from './query-config';
 
 export const sessionKeys = {

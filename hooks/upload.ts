@@ -1,7 +1,5 @@
-import { ApiError, errorFromResponse } from './api-client';
-
-/** A file the person chose: the web's File when there is one, otherwise a local URI (native). */
-export type ChosenFile = { uri: string; name: string; mimeType: string; file?: Blob };
+import { ApiError, errorFromResponse } from './api-errors';
+import { type ChosenFile } from './chosen-file';
 
 export type UploadProgress = { loaded: number; total: number };
 

@@ -1,6 +1,6 @@
 import { type FieldError, type FieldErrors } from 'react-hook-form';
 
-import { ApiError, errorMessage } from '@/hooks/api-client';
+import { ApiError, errorMessage } from '@/hooks/api-errors';
 
 type Messages = Record<string, string>;
 

@@ -1,6 +1,6 @@
 import * as ImagePicker from 'expo-image-picker';
 
-import { type ChosenFile } from '@/hooks/upload';
+import { type ChosenFile } from '@/hooks/chosen-file';
 
 /**
  * Photos from the phone's library, or the browser's file chooser on the web; several at once.

@@ -4,7 +4,7 @@ import { Pressable, type PressableProps, StyleSheet, View } from 'react-native';
 
 import { type NavItem } from '@/constants/navigation';
 import { palette, radii, spacing, touchTarget } from '@/constants/theme';
-import { errorMessage } from '@/hooks/api-client';
+import { errorMessage } from '@/hooks/api-errors';
 import { useSignOutMutation } from '@/hooks/session';
 import { useBreakpoint } from '@/hooks/use-breakpoint';
 import { type Membership } from '@/shared/schemas/membership';

@@ -23,9 +23,11 @@ import {
   workImportResultSchema,
 } from '@/shared/schemas/work-import';
 
-import { ApiError, apiRequest } from '../api-client';
+import { apiRequest } from '../api-client';
+import { ApiError } from '../api-errors';
+import { type ChosenFile } from '../chosen-file';
 import { staleTimes } from '../query-config';
-import { type ChosenFile, uploadFiles, type UploadProgress } from '../upload';
+import { uploadFiles, type UploadProgress } from '../upload';
 import { overviewKeys } from './overview';
 import { queryString } from './query-string';
 import { studioKeys } from './studio';

@@ -7,7 +7,7 @@ import { Screen } from '@/components/ui/screen';
 import { EmptyView, ErrorView, LoadingView } from '@/components/ui/status-views';
 import { Heading, Text } from '@/components/ui/text';
 import { spacing } from '@/constants/theme';
-import { errorMessage } from '@/hooks/api-client';
+import { errorMessage } from '@/hooks/api-errors';
 import {
   areaHref,
   homeArea,

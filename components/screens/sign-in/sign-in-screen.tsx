@@ -9,7 +9,7 @@ import { Screen } from '@/components/ui/screen';
 import { Heading, Text } from '@/components/ui/text';
 import { TextField } from '@/components/ui/text-field';
 import { spacing } from '@/constants/theme';
-import { ApiError, errorMessage } from '@/hooks/api-client';
+import { ApiError, errorMessage } from '@/hooks/api-errors';
 import { useSignInMutation } from '@/hooks/session';
 import { type SignIn, signInSchema } from '@/shared/schemas/session';
 

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 
 import { type PhotoTile } from '@/components/ui/photo-strip';
-import { type ChosenFile } from '@/hooks/upload';
+import { type ChosenFile } from '@/hooks/chosen-file';
 
 type Pending = { key: string; file: ChosenFile };
 

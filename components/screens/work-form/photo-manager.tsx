@@ -2,7 +2,7 @@ import { useState } from 'react';
 
 import { pickPhotos } from '@/components/ui/photo-picker';
 import { PhotoStrip } from '@/components/ui/photo-strip';
-import { errorMessage } from '@/hooks/api-client';
+import { errorMessage } from '@/hooks/api-errors';
 import {
   usePhotoDeleteMutation,
   usePhotoOrderMutation,

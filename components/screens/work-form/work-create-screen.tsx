@@ -11,7 +11,7 @@ import { Screen } from '@/components/ui/screen';
 import { ErrorView, LoadingView } from '@/components/ui/status-views';
 import { Heading, Text } from '@/components/ui/text';
 import { spacing } from '@/constants/theme';
-import { errorMessage } from '@/hooks/api-client';
+import { errorMessage } from '@/hooks/api-errors';
 import { useStudioQuery } from '@/hooks/queries/studio';
 import { usePhotoUploadMutation, useWorkCreateMutation } from '@/hooks/queries/works';
 import { type Work } from '@/shared/schemas/work';

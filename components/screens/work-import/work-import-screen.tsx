@@ -12,7 +12,7 @@ import { EmptyView, LoadingView } from '@/components/ui/status-views';
 import { Heading, Text } from '@/components/ui/text';
 import { TextLink } from '@/components/ui/text-link';
 import { spacing } from '@/constants/theme';
-import { errorMessage } from '@/hooks/api-client';
+import { errorMessage } from '@/hooks/api-errors';
 import { useWorkImportCommitMutation, useWorkImportPreviewMutation } from '@/hooks/queries/works';
 import {
   type ImportColumn,

@@ -6,7 +6,7 @@ import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
 import { spacing } from '@/constants/theme';
-import { errorMessage } from '@/hooks/api-client';
+import { errorMessage } from '@/hooks/api-errors';
 import { useWorkArchiveMutation, useWorkDeleteMutation } from '@/hooks/queries/works';
 import { type Work } from '@/shared/schemas/work';
 
