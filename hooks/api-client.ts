@@ -54,4 +54,3 @@ export async function apiRequest<S extends z.ZodType | undefined = undefined>(
   if (!parsed.success) throw new ApiError(response.status, 'unexpected_response', '');
   return parsed.data as Result<S>;
 }
-
