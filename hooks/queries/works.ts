@@ -8,12 +8,12 @@ import {
 
 import {
   type WorkCreateParsed,
+  type WorkExportQuery,
   workFacetsSchema,
+  type WorkListQuery,
   workListSchema,
   workPhotosSchema,
   workSchema,
-  type WorkSort,
-  type WorkStatus,
   type WorkUpdateParsed,
 } from '@/shared/schemas/work';
 import { workHistorySchema } from '@/shared/schemas/work-history';
@@ -32,23 +32,10 @@ import { overviewKeys } from './overview';
 import { queryString } from './query-string';
 import { studioKeys } from './studio';
 
-/** What a works list asks for: the `GET /api/works` query with its values typed. */
-export type WorksFilter = {
-  search?: string;
-  status?: WorkStatus;
-  series?: string;
-  category?: string;
-  venueId?: number;
-  archived?: 'exclude' | 'include' | 'only';
-  sort?: WorkSort;
-  page?: number;
-  pageSize?: number;
-};
-
 export const workKeys = {
   all: ['works'] as const,
   lists: () => [...workKeys.all, 'list'] as const,
-  list: (query: WorksFilter) => [...workKeys.lists(), query] as const,
+  list: (query: WorkListQuery) => [...workKeys.lists(), query] as const,
   facets: () => [...workKeys.all, 'facets'] as const,
   details: () => [...workKeys.all, 'detail'] as const,
   detail: (id: number) => [...workKeys.details(), id] as const,
@@ -66,24 +53,11 @@ async function invalidateWorks(queryClient: QueryClient, id?: number) {
   ]);
 }
 
-export function useWorksQuery(query: WorksFilter) {
+export function useWorksQuery(query: WorkListQuery) {
   return useQuery({
     queryKey: workKeys.list(query),
     queryFn: ({ signal }) =>
-      apiRequest(
-        `/api/works${queryString({
-          search: query.search,
-          status: query.status,
-          series: query.series,
-          category: query.category,
-          venueId: query.venueId,
-          archived: query.archived,
-          sort: query.sort,
-          page: query.page,
-          pageSize: query.pageSize,
-        })}`,
-        { schema: workListSchema, signal },
-      ),
+      apiRequest(`/api/works${queryString(query)}`, { schema: workListSchema, signal }),
     staleTime: staleTimes.works,
     // Keep the last page on screen while the next sort, filter or page loads.
     placeholderData: keepPreviousData,
@@ -229,14 +203,6 @@ export function useWorkImportCommitMutation() {
  * The catalogue as CSV, with the list's search, filters and sort but not its paging, downloaded by
  * the browser with the session cookie.
  */
-export function worksExportPath(query: Omit<WorksFilter, 'page' | 'pageSize'>): string {
-  return `/api/works/export.csv${queryString({
-    search: query.search,
-    status: query.status,
-    series: query.series,
-    category: query.category,
-    venueId: query.venueId,
-    archived: query.archived,
-    sort: query.sort,
-  })}`;
+export function worksExportPath(query: WorkExportQuery): string {
+  return `/api/works/export.csv${queryString(query)}`;
 }

@@ -154,12 +154,12 @@ export const workListQuerySchema = z.strictObject({
   status: workStatusSchema.optional(),
   series: lineText('series', 120).optional(),
   category: lineText('category', 120).optional(),
-  venueId: z.coerce.number().int().positive().optional(),
+  venueId: z.coerce.number<number | string>().int().positive().optional(),
   archived: z.enum(['exclude', 'include', 'only']).default('exclude'),
   sort: workSortSchema.default('stockNumber'),
-  page: z.coerce.number().int().min(1, { error: 'Pages start at 1.' }).default(1),
+  page: z.coerce.number<number | string>().int().min(1, { error: 'Pages start at 1.' }).default(1),
   pageSize: z.coerce
-    .number()
+    .number<number | string>()
     .int()
     .min(1)
     .max(100, { error: 'Ask for at most 100 works a page.' })

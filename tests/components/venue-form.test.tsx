@@ -3,7 +3,7 @@ import { fireEvent, render, screen, waitFor } from '@testing-library/react-nativ
 import { VenueForm } from '@/components/screens/venue-form/venue-form';
 import {
   newVenueValues,
-  venueCreateResolvers,
+  venueCreateBindings,
 } from '@/components/screens/venue-form/venue-form-values';
 
 function renderForm(termsEditable: boolean, onSubmit: (values: object) => Promise<void>) {
@@ -11,7 +11,7 @@ function renderForm(termsEditable: boolean, onSubmit: (values: object) => Promis
     <VenueForm
       label="New venue"
       defaultValues={newVenueValues('GBP')}
-      resolver={termsEditable ? venueCreateResolvers.withTerms : venueCreateResolvers.detailsOnly}
+      binding={termsEditable ? venueCreateBindings.withTerms : venueCreateBindings.detailsOnly}
       submitLabel="Save venue"
       termsEditable={termsEditable}
       onSubmit={onSubmit}

@@ -1,10 +1,7 @@
 import { fireEvent, render, screen, waitFor } from '@testing-library/react-native';
 
 import { WorkForm } from '@/components/screens/work-form/work-form';
-import {
-  emptyWorkValues,
-  workCreateResolver,
-} from '@/components/screens/work-form/work-form-values';
+import { emptyWorkValues, workBinding } from '@/components/screens/work-form/work-form-values';
 import { useWorkCreateMutation } from '@/hooks/queries/works';
 
 import { mockFetch } from './fetch-mock';
@@ -16,7 +13,7 @@ function CreateForm({ onSaved }: { onSaved: () => void }) {
     <WorkForm
       mode="create"
       defaultValues={emptyWorkValues('2026-014')}
-      resolver={workCreateResolver('GBP')}
+      binding={workBinding('create', 'GBP')}
       currency="GBP"
       submitLabel="Save work"
       busyLabel="Saving…"

@@ -1,18 +1,17 @@
-import { zodResolver } from '@hookform/resolvers/zod';
-import { Controller, useForm } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
-import { moneyText, parseMoneyText } from '@/components/ui/decimal-text';
+import { moneyText } from '@/components/ui/decimal-text';
 import { FieldList } from '@/components/ui/field-list';
-import { serverErrors } from '@/components/ui/form-errors';
-import { MoneyField } from '@/components/ui/money-field';
+import { bindForm } from '@/components/ui/form/binding';
+import { moneyCodec, textCodec } from '@/components/ui/form/codecs';
+import { FormMoney, FormText } from '@/components/ui/form/fields';
+import { useSchemaForm } from '@/components/ui/form/use-schema-form';
 import { Notice } from '@/components/ui/notice';
 import { Screen } from '@/components/ui/screen';
 import { ErrorView, LoadingView } from '@/components/ui/status-views';
 import { Heading, Text } from '@/components/ui/text';
-import { TextField } from '@/components/ui/text-field';
 import { spacing } from '@/constants/theme';
 import { useStudioQuery, useStudioUpdateMutation } from '@/hooks/queries/studio';
 import { activeMembership, useMeQuery } from '@/hooks/session';
@@ -24,89 +23,63 @@ import {
 } from '@/shared/schemas/studio';
 
 type SettingsValues = { stockNumberPattern: string; priceStep: string };
-const fields = ['stockNumberPattern', 'priceStep'] as const;
-const fieldFor = (path: string) => fields.find((field) => field === path.split('.')[0]);
+
+function settingsBinding(currency: string) {
+  const money = moneyCodec(currency);
+  return bindForm<SettingsValues, StudioSettingsUpdate>(studioSettingsUpdateSchema, {
+    stockNumberPattern: {
+      read: textCodec,
+      blank: { required: 'Enter a stock-number pattern such as {YYYY}-{NNN}.' },
+    },
+    priceStep: {
+      // The step is sent in minor units: 5.00 is 500.
+      read: (text: string) => {
+        const step = money(text);
+        return step.kind === 'ok' ? { kind: 'ok' as const, value: step.value.amount } : step;
+      },
+      blank: { required: 'Enter the price step, such as 5.00.' },
+    },
+  });
+}
+
+const valuesOf = (settings: StudioSettings): SettingsValues => ({
+  stockNumberPattern: settings.stockNumberPattern,
+  priceStep: moneyText({ amount: settings.priceStep, currency: settings.currency }),
+});
 
 function SettingsForm({ settings }: { settings: StudioSettings }) {
   const update = useStudioUpdateMutation();
-  const check = zodResolver(studioSettingsUpdateSchema);
-  const { control, handleSubmit, setError, formState, reset } = useForm<
-    SettingsValues,
-    unknown,
-    StudioSettingsUpdate
-  >({
-    defaultValues: {
-      stockNumberPattern: settings.stockNumberPattern,
-      priceStep: moneyText({ amount: settings.priceStep, currency: settings.currency }),
-    },
-    resolver: async (values, context, options) => {
-      const step = parseMoneyText(values.priceStep, settings.currency);
-      if (step.kind !== 'ok') {
-        const message =
-          step.kind === 'empty' ? 'Enter the price step, such as 5.00.' : step.message;
-        return { values: {}, errors: { priceStep: { type: 'parse', message } } };
-      }
-      return check(
-        { stockNumberPattern: values.stockNumberPattern, priceStep: step.value.amount },
-        context,
-        options as never,
-      ) as never;
-    },
-  });
-  const submit = handleSubmit(async (values) => {
-    try {
-      const saved = await update.mutateAsync(values);
-      // The saved values become the form's baseline, so "saved" shows until the next edit.
-      reset({
-        stockNumberPattern: saved.stockNumberPattern,
-        priceStep: moneyText({ amount: saved.priceStep, currency: saved.currency }),
-      });
-    } catch (error) {
-      const message = serverErrors(error, fieldFor, (field, e) => setError(field, e));
-      if (message !== null) setError('root.server', { message });
-    }
+  const { control, formState, reset, submit } = useSchemaForm(
+    settingsBinding(settings.currency),
+    valuesOf(settings),
+  );
+  const save = submit(async (values) => {
+    // The saved values become the form's baseline, so "saved" shows until the next edit.
+    reset(valuesOf(await update.mutateAsync(values)));
   });
   const formError = formState.errors.root?.server?.message;
   return (
     <Card style={styles.form}>
-      <Controller
+      <FormText
         control={control}
         name="stockNumberPattern"
-        render={({ field, fieldState }) => (
-          <TextField
-            ref={field.ref}
-            testID="settings-pattern"
-            label="Stock-number pattern"
-            hint="{YYYY} or {YY} for the year and {NNN} for a counter: {YYYY}-{NNN} gives 2026-007."
-            value={field.value}
-            onChangeText={field.onChange}
-            onBlur={field.onBlur}
-            error={fieldState.error?.message}
-            autoCapitalize="characters"
-            autoCorrect={false}
-          />
-        )}
+        testID="settings-pattern"
+        label="Stock-number pattern"
+        hint="{YYYY} or {YY} for the year and {NNN} for a counter: {YYYY}-{NNN} gives 2026-007."
+        autoCapitalize="characters"
+        autoCorrect={false}
       />
       <Text
         variant="small"
         testID="settings-next"
       >{`Next stock number: ${settings.nextStockNumber}`}</Text>
-      <Controller
+      <FormMoney
         control={control}
         name="priceStep"
-        render={({ field, fieldState }) => (
-          <MoneyField
-            ref={field.ref}
-            testID="settings-price-step"
-            label="Price step"
-            hint="Planned list prices are rounded up to a multiple of this."
-            currency={settings.currency}
-            value={field.value}
-            onChangeText={field.onChange}
-            onBlur={field.onBlur}
-            error={fieldState.error?.message}
-          />
-        )}
+        testID="settings-price-step"
+        label="Price step"
+        hint="Planned list prices are rounded up to a multiple of this."
+        currency={settings.currency}
       />
       {formError ? <Notice message={formError} /> : null}
       {update.isSuccess && !formState.isDirty ? (
@@ -118,7 +91,7 @@ function SettingsForm({ settings }: { settings: StudioSettings }) {
           label="Save settings"
           busyLabel="Saving…"
           busy={formState.isSubmitting}
-          onPress={submit}
+          onPress={save}
         />
       </View>
     </Card>

@@ -11,7 +11,7 @@ import { useVenueCreateMutation } from '@/hooks/queries/venues';
 import { useActiveRole } from '@/hooks/session';
 
 import { VenueForm } from './venue-form';
-import { newVenueValues, venueCreateResolvers } from './venue-form-values';
+import { newVenueValues, venueCreateBindings } from './venue-form-values';
 
 export function VenueCreateScreen() {
   const owner = useActiveRole() === 'owner';
@@ -37,7 +37,7 @@ export function VenueCreateScreen() {
         <VenueForm
           label="New venue"
           defaultValues={newVenueValues(studio.data.currency)}
-          resolver={owner ? venueCreateResolvers.withTerms : venueCreateResolvers.detailsOnly}
+          binding={owner ? venueCreateBindings.withTerms : venueCreateBindings.detailsOnly}
           termsEditable={owner}
           submitLabel="Save venue"
           onSubmit={async (values) => {

@@ -10,7 +10,7 @@ import { useVenueQuery, useVenueUpdateMutation } from '@/hooks/queries/venues';
 import { useActiveRole } from '@/hooks/session';
 
 import { VenueForm } from './venue-form';
-import { venueUpdateResolvers, venueValues } from './venue-form-values';
+import { venueUpdateBindings, venueValues } from './venue-form-values';
 
 export function VenueEditScreen({ id }: { id: number }) {
   const owner = useActiveRole() === 'owner';
@@ -33,7 +33,7 @@ export function VenueEditScreen({ id }: { id: number }) {
           <VenueForm
             label={`Edit ${venue.data.venue.name}`}
             defaultValues={venueValues(venue.data.venue)}
-            resolver={owner ? venueUpdateResolvers.withTerms : venueUpdateResolvers.detailsOnly}
+            binding={owner ? venueUpdateBindings.withTerms : venueUpdateBindings.detailsOnly}
             termsEditable={owner}
             submitLabel="Save changes"
             onSubmit={async (values) => {

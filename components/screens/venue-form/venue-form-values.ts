@@ -1,14 +1,13 @@
-import { zodResolver } from '@hookform/resolvers/zod';
-import { type Resolver } from 'react-hook-form';
-
+import { moneyText, type Parsed, percentText } from '@/components/ui/decimal-text';
+import { bindForm, type FieldBindings } from '@/components/ui/form/binding';
 import {
-  moneyText,
-  parseMoneyText,
-  parsePercentText,
-  percentText,
-  wholeNumberValue,
-} from '@/components/ui/decimal-text';
-import { liftErrors, messagesToErrors } from '@/components/ui/form-errors';
+  choiceCodec,
+  moneyCodec,
+  numberCodec,
+  percentCodec,
+  textCodec,
+  yesNoCodec,
+} from '@/components/ui/form/codecs';
 import {
   type CommissionVat,
   defaultTerms,
@@ -59,21 +58,6 @@ export type VenueFormValues = TermsFormValues & {
   vatNumber: string;
   notes: string;
 };
-export type VenueField = keyof VenueFormValues;
-
-const textFields = [
-  'name',
-  'addressLine1',
-  'addressLine2',
-  'town',
-  'postcode',
-  'contactName',
-  'email',
-  'phone',
-  'vatNumber',
-  'notes',
-] as const satisfies readonly VenueField[];
-
 export function termsValues(terms: Terms): TermsFormValues {
   return {
     currency: terms.currency,
@@ -128,132 +112,83 @@ export function venueValues(venue: Venue): VenueFormValues {
   };
 }
 
-type Converted<T> = { value: T; messages: Record<string, string> };
+/** A code typed in capitals or not (a currency, a country); blank is none. */
+const codeCodec = (text: string): Parsed<string> =>
+  text.trim() === '' ? { kind: 'empty' } : { kind: 'ok', value: text.trim().toUpperCase() };
+
+/** The terms fields, placed at `prefix` in the body (`defaultTerms.` in a venue's). */
+function termsFields(prefix: string, sent: () => boolean): FieldBindings<TermsFormValues> {
+  const at = (path: string) => ({ path: `${prefix}${path}`, when: sent });
+  return {
+    currency: { ...at('currency'), read: codeCodec },
+    commissionRate: {
+      ...at('commissionRateBp'),
+      read: percentCodec,
+      blank: { required: 'Enter the commission rate, such as 40.' },
+    },
+    vatRate: {
+      ...at('vatRateBp'),
+      read: percentCodec,
+      blank: { required: 'Enter the VAT rate, such as 20.' },
+    },
+    venueRole: { ...at('venueRole'), read: choiceCodec },
+    commissionVat: { ...at('commissionVat'), read: choiceCodec },
+    makerVatRegistered: { ...at('makerVatRegistered'), read: yesNoCodec },
+    discountRule: { ...at('discountRule'), read: choiceCodec },
+    insuranceBasis: { ...at('insuranceBasis'), read: choiceCodec },
+    agreedInsuranceValue: {
+      path: `${prefix}agreedInsuranceValue`,
+      // In the terms' own currency, and only when the basis is an agreed value.
+      read: (text, values) => moneyCodec(values.currency.trim().toUpperCase())(text),
+      when: (values) => sent() && values.insuranceBasis === 'agreed',
+      blank: 'omit',
+    },
+    insuredBy: { ...at('insuredBy'), read: choiceCodec },
+    paymentDays: { ...at('paymentTerms.days'), read: numberCodec },
+    paymentFrom: { ...at('paymentTerms.from'), read: choiceCodec },
+  };
+}
+
+function venueFields(withTerms: boolean): FieldBindings<VenueFormValues> {
+  return {
+    name: { read: textCodec, blank: { required: 'Enter the venue’s name.' } },
+    kind: { read: choiceCodec },
+    addressLine1: { read: textCodec },
+    addressLine2: { read: textCodec },
+    town: { read: textCodec },
+    postcode: { read: textCodec },
+    country: { read: codeCodec },
+    contactName: { read: textCodec },
+    email: { read: textCodec },
+    phone: { read: textCodec },
+    vatNumber: { read: textCodec },
+    notes: { read: textCodec },
+    ...termsFields('defaultTerms.', () => withTerms),
+  };
+}
 
 /**
- * The terms fields as the Terms shape: percentages to basis points and amounts to minor units,
- * exactly. Unreadable text gets a message here; the shared schema judges the rest.
+ * The owner's form sends the terms; an assistant's keeps the details only (the server refuses
+ * terms from anyone but the owner).
  */
-export function toTermsInput(values: TermsFormValues): Converted<Record<string, unknown>> {
-  const messages: Record<string, string> = {};
-  const currency = values.currency.trim().toUpperCase();
-  const rate = (text: string, field: string, what: string) => {
-    const parsed = parsePercentText(text);
-    if (parsed.kind === 'ok') return parsed.value;
-    messages[field] = parsed.kind === 'empty' ? `Enter the ${what}, such as 40.` : parsed.message;
-    return undefined;
-  };
-  const terms: Record<string, unknown> = {
-    currency,
-    commissionRateBp: rate(values.commissionRate, 'commissionRate', 'commission rate'),
-    vatRateBp: rate(values.vatRate, 'vatRate', 'VAT rate'),
-    venueRole: values.venueRole,
-    commissionVat: values.commissionVat,
-    makerVatRegistered: values.makerVatRegistered === 'yes',
-    discountRule: values.discountRule,
-    insuranceBasis: values.insuranceBasis,
-    insuredBy: values.insuredBy,
-    paymentTerms: { days: wholeNumberValue(values.paymentDays), from: values.paymentFrom },
-  };
-  if (values.insuranceBasis === 'agreed') {
-    const agreed = /^[A-Z]{3}$/.test(currency)
-      ? parseMoneyText(values.agreedInsuranceValue, currency)
-      : ({ kind: 'empty' } as const);
-    if (agreed.kind === 'ok') terms.agreedInsuranceValue = agreed.value;
-    else if (agreed.kind === 'invalid') messages.agreedInsuranceValue = agreed.message;
-  }
-  return { value: terms, messages };
-}
-
-/** The form as the API's venue body; without `withTerms` (an assistant) the terms stay out. */
-export function toVenueInput(
-  values: VenueFormValues,
-  withTerms = true,
-): Converted<Record<string, unknown>> {
-  const input: Record<string, unknown> = { kind: values.kind };
-  for (const field of textFields) input[field] = values[field];
-  const country = values.country.trim().toUpperCase();
-  input.country = country === '' ? null : country;
-  if (!withTerms) return { value: input, messages: {} };
-  const terms = toTermsInput(values);
-  input.defaultTerms = terms.value;
-  return { value: input, messages: terms.messages };
-}
-
-const termsPaths: Record<string, VenueField> = {
-  commissionRateBp: 'commissionRate',
-  vatRateBp: 'vatRate',
-  paymentTerms: 'paymentDays',
-  'paymentTerms.days': 'paymentDays',
-  'paymentTerms.from': 'paymentFrom',
-  agreedInsuranceValue: 'agreedInsuranceValue',
+export const venueCreateBindings = {
+  withTerms: bindForm<VenueFormValues, VenueCreateParsed>(venueCreateSchema, venueFields(true)),
+  detailsOnly: bindForm<VenueFormValues, VenueCreateParsed>(venueCreateSchema, venueFields(false)),
+};
+export const venueUpdateBindings = {
+  withTerms: bindForm<VenueFormValues, VenueUpdateParsed>(venueUpdateSchema, venueFields(true)),
+  detailsOnly: bindForm<VenueFormValues, VenueUpdateParsed>(venueUpdateSchema, venueFields(false)),
 };
 
-const allFields = new Set<string>([
-  ...textFields,
-  'kind',
-  'country',
-  'currency',
-  'venueRole',
-  'commissionVat',
-  'makerVatRegistered',
-  'discountRule',
-  'insuranceBasis',
-  'insuredBy',
-]);
-
-/** A schema path (`defaultTerms.commissionRateBp`) to the form field that shows it. */
-export function venueFieldFor(path: string): VenueField | undefined {
-  const parts = path.split('.');
-  if (parts[0] !== 'defaultTerms') {
-    return allFields.has(parts[0] ?? '') ? (parts[0] as VenueField) : undefined;
-  }
-  const rest = parts.slice(1);
-  const exact = termsPaths[rest.join('.')] ?? termsPaths[rest.slice(0, 2).join('.')];
-  if (exact) return exact;
-  const first = rest[0] ?? '';
-  if (first === 'agreedInsuranceValue') return 'agreedInsuranceValue';
-  return allFields.has(first) ? (first as VenueField) : undefined;
-}
+const termsBinding = bindForm<TermsFormValues, Terms>(
+  termsSchema,
+  termsFields('', () => true),
+);
 
 /** Terms from the form for the net preview; null while something in them cannot be read. */
 export function previewTerms(values: TermsFormValues): Terms | null {
-  const { value, messages } = toTermsInput(values);
+  const { body, messages } = termsBinding.toBody(values);
   if (Object.keys(messages).length > 0) return null;
-  const result = termsSchema.safeParse(value);
+  const result = termsSchema.safeParse(body);
   return result.success ? result.data : null;
 }
-
-function composeResolver<Parsed extends object>(
-  check: Resolver<Record<string, unknown>, unknown, Parsed>,
-  withTerms: boolean,
-): Resolver<VenueFormValues, unknown, Parsed> {
-  return async (values, context, options) => {
-    const { value, messages } = toVenueInput(values, withTerms);
-    const result = await check(value, context, options as never);
-    const errors = { ...liftErrors(result.errors, venueFieldFor), ...messagesToErrors(messages) };
-    if (Object.keys(errors).length > 0) return { values: {}, errors };
-    return { values: result.values as Parsed, errors: {} };
-  };
-}
-
-const checkCreate = zodResolver(venueCreateSchema) as unknown as Resolver<
-  Record<string, unknown>,
-  unknown,
-  VenueCreateParsed
->;
-const checkUpdate = zodResolver(venueUpdateSchema) as unknown as Resolver<
-  Record<string, unknown>,
-  unknown,
-  VenueUpdateParsed
->;
-
-/** Resolvers for the owner, who sets terms, and for an assistant, who keeps the details only. */
-export const venueCreateResolvers = {
-  withTerms: composeResolver(checkCreate, true),
-  detailsOnly: composeResolver(checkCreate, false),
-};
-export const venueUpdateResolvers = {
-  withTerms: composeResolver(checkUpdate, true),
-  detailsOnly: composeResolver(checkUpdate, false),
-};

@@ -1,21 +1,18 @@
-import { type Control, Controller, type Resolver, useForm, useWatch } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 
 import { Card } from '@/components/ui/card';
-import { Choice, type ChoiceOption } from '@/components/ui/choice';
 import { FieldCell, FieldRow } from '@/components/ui/field-row';
-import { serverErrors } from '@/components/ui/form-errors';
+import { type FormBinding } from '@/components/ui/form/binding';
+import { FormChoice, FormMoney, FormNumber, FormText } from '@/components/ui/form/fields';
+import { useSchemaForm } from '@/components/ui/form/use-schema-form';
 import { FormFooter } from '@/components/ui/form-footer';
-import { MoneyField } from '@/components/ui/money-field';
 import { Notice } from '@/components/ui/notice';
-import { NumberField } from '@/components/ui/number-field';
 import { Heading, Text } from '@/components/ui/text';
-import { TextField, type TextFieldProps } from '@/components/ui/text-field';
 import { spacing } from '@/constants/theme';
 import { useBreakpoint } from '@/hooks/use-breakpoint';
 
 import { NetPreview } from './net-preview';
-import { type VenueField, venueFieldFor, type VenueFormValues } from './venue-form-values';
+import { type VenueFormValues } from './venue-form-values';
 import {
   commissionVatWords,
   discountRuleWords,
@@ -27,83 +24,9 @@ import {
   venueRoleWords,
 } from './venue-words';
 
-type AnyControl = Control<VenueFormValues, unknown, object>;
-type TextName = {
-  [K in VenueField]: VenueFormValues[K] extends string
-    ? string extends VenueFormValues[K]
-      ? K
-      : never
-    : never;
-}[VenueField];
-type ChoiceName = Exclude<VenueField, TextName>;
-
-type InputProps = Omit<TextFieldProps, 'testID' | 'value' | 'onChangeText'> & {
-  control: AnyControl;
-  name: TextName;
-  kind?: 'text' | 'percent' | 'number' | 'money';
-  unit?: string;
-  currency?: string;
-};
-
-function Input({ control, name, kind = 'text', unit, currency = 'GBP', ...props }: InputProps) {
-  return (
-    <Controller
-      control={control}
-      name={name}
-      render={({ field, fieldState }) => {
-        const common = {
-          ...props,
-          ref: field.ref,
-          testID: `venue-${name}`,
-          value: field.value as string,
-          onChangeText: field.onChange,
-          onBlur: field.onBlur,
-          error: fieldState.error?.message,
-        };
-        if (kind === 'money') return <MoneyField {...common} currency={currency} />;
-        if (kind === 'percent') return <NumberField {...common} unit="%" decimal />;
-        if (kind === 'number') return <NumberField {...common} unit={unit} />;
-        return <TextField {...common} />;
-      }}
-    />
-  );
-}
-
-function Pick<N extends ChoiceName>({
-  control,
-  name,
-  label,
-  choices,
-  hint,
-}: {
-  control: AnyControl;
-  name: N;
-  label: string;
-  choices: ChoiceOption<VenueFormValues[N] & string>[];
-  hint?: string;
-}) {
-  return (
-    <Controller
-      control={control}
-      name={name}
-      render={({ field, fieldState }) => (
-        <Choice
-          testID={`venue-${name}`}
-          label={label}
-          hint={hint}
-          options={choices}
-          value={field.value as VenueFormValues[N] & string}
-          onChange={field.onChange}
-          error={fieldState.error?.message}
-        />
-      )}
-    />
-  );
-}
-
-type VenueFormProps<Parsed extends object> = {
+type VenueFormProps<Parsed> = {
   defaultValues: VenueFormValues;
-  resolver: Resolver<VenueFormValues, unknown, Parsed>;
+  binding: FormBinding<VenueFormValues, Parsed>;
   onSubmit: (values: Parsed) => Promise<void>;
   submitLabel: string;
   label: string;
@@ -112,34 +35,20 @@ type VenueFormProps<Parsed extends object> = {
 };
 
 /** A venue and its default terms, with what the maker would net shown beside the terms. */
-export function VenueForm<Parsed extends object>({
+export function VenueForm<Parsed>({
   defaultValues,
-  resolver,
+  binding,
   onSubmit,
   submitLabel,
   label,
   termsEditable,
 }: VenueFormProps<Parsed>) {
   const { wide } = useBreakpoint();
-  const { control, handleSubmit, setError, formState } = useForm<VenueFormValues, unknown, Parsed>({
-    resolver,
-    defaultValues,
-  });
-  const any = control as unknown as AnyControl;
-  const values = useWatch({ control });
-  const terms = { ...defaultValues, ...values } as VenueFormValues;
-  const currency = /^[A-Z]{3}$/.test(terms.currency.trim().toUpperCase())
-    ? terms.currency.trim().toUpperCase()
-    : 'GBP';
-
-  const submit = handleSubmit(async (parsed) => {
-    try {
-      await onSubmit(parsed);
-    } catch (error) {
-      const message = serverErrors(error, venueFieldFor, (field, e) => setError(field, e));
-      if (message !== null) setError('root.server', { message });
-    }
-  });
+  const { control, formState, submit, watch } = useSchemaForm(binding, defaultValues);
+  const terms = watch();
+  const typed = terms.currency.trim().toUpperCase();
+  const currency = /^[A-Z]{3}$/.test(typed) ? typed : 'GBP';
+  const field = { control } as const;
 
   const termsFields = !termsEditable ? (
     <Card style={styles.section} testID="venue-terms-locked">
@@ -157,75 +66,107 @@ export function VenueForm<Parsed extends object>({
       </Text>
       <FieldRow>
         <FieldCell basis={140}>
-          <Input control={any} name="commissionRate" label="Commission" kind="percent" />
+          <FormNumber
+            {...field}
+            name="commissionRate"
+            testID="venue-commissionRate"
+            unit="%"
+            decimal
+            label="Commission"
+          />
         </FieldCell>
         <FieldCell basis={140}>
-          <Input control={any} name="vatRate" label="VAT rate" kind="percent" />
+          <FormNumber
+            {...field}
+            name="vatRate"
+            testID="venue-vatRate"
+            unit="%"
+            decimal
+            label="VAT rate"
+          />
         </FieldCell>
         <FieldCell basis={120}>
-          <Input
-            control={any}
+          <FormText
+            {...field}
             name="currency"
+            testID="venue-currency"
             label="Currency"
             autoCapitalize="characters"
             maxLength={3}
           />
         </FieldCell>
       </FieldRow>
-      <Pick control={any} name="venueRole" label="The venue" choices={options(venueRoleWords)} />
-      <Pick
-        control={any}
-        name="commissionVat"
-        label="VAT on the commission"
-        choices={options(commissionVatWords)}
+      <FormChoice
+        {...field}
+        name="venueRole"
+        testID="venue-venueRole"
+        label="The venue"
+        options={options(venueRoleWords)}
       />
-      <Pick
-        control={any}
+      <FormChoice
+        {...field}
+        name="commissionVat"
+        testID="venue-commissionVat"
+        label="VAT on the commission"
+        options={options(commissionVatWords)}
+      />
+      <FormChoice
+        {...field}
         name="makerVatRegistered"
+        testID="venue-makerVatRegistered"
         label="Are you VAT-registered?"
-        choices={[
+        options={[
           { value: 'no', label: 'No' },
           { value: 'yes', label: 'Yes' },
         ]}
       />
-      <Pick
-        control={any}
+      <FormChoice
+        {...field}
         name="discountRule"
+        testID="venue-discountRule"
         label="Who bears a discount"
-        choices={options(discountRuleWords)}
+        options={options(discountRuleWords)}
       />
-      <Pick
-        control={any}
+      <FormChoice
+        {...field}
         name="insuranceBasis"
+        testID="venue-insuranceBasis"
         label="Insured at"
-        choices={options(insuranceBasisWords)}
+        options={options(insuranceBasisWords)}
       />
       {terms.insuranceBasis === 'agreed' ? (
-        <Input
-          control={any}
+        <FormMoney
+          {...field}
           name="agreedInsuranceValue"
+          testID="venue-agreedInsuranceValue"
           label="Agreed insurance value"
-          kind="money"
           currency={currency}
         />
       ) : null}
-      <Pick control={any} name="insuredBy" label="Who insures" choices={options(insurerWords)} />
+      <FormChoice
+        {...field}
+        name="insuredBy"
+        testID="venue-insuredBy"
+        label="Who insures"
+        options={options(insurerWords)}
+      />
       <FieldRow>
         <FieldCell basis={140}>
-          <Input
-            control={any}
+          <FormNumber
+            {...field}
             name="paymentDays"
+            testID="venue-paymentDays"
             label="Payment within"
-            kind="number"
             unit="days"
           />
         </FieldCell>
       </FieldRow>
-      <Pick
-        control={any}
+      <FormChoice
+        {...field}
         name="paymentFrom"
+        testID="venue-paymentFrom"
         label="Counted from"
-        choices={options(paymentFromWords)}
+        options={options(paymentFromWords)}
       />
     </Card>
   );
@@ -234,16 +175,28 @@ export function VenueForm<Parsed extends object>({
     <View role="form" aria-label={label} style={styles.form}>
       <Card style={styles.section}>
         <Heading level={2}>The venue</Heading>
-        <Input control={any} name="name" label="Name" />
-        <Pick control={any} name="kind" label="Kind" choices={options(venueKindWords)} />
+        <FormText {...field} name="name" testID="venue-name" label="Name" />
+        <FormChoice
+          {...field}
+          name="kind"
+          testID="venue-kind"
+          label="Kind"
+          options={options(venueKindWords)}
+        />
         <FieldRow>
           <FieldCell>
-            <Input control={any} name="contactName" label="Contact name (optional)" />
+            <FormText
+              {...field}
+              name="contactName"
+              testID="venue-contactName"
+              label="Contact name (optional)"
+            />
           </FieldCell>
           <FieldCell>
-            <Input
-              control={any}
+            <FormText
+              {...field}
               name="email"
+              testID="venue-email"
               label="E-mail (optional)"
               inputMode="email"
               autoCapitalize="none"
@@ -251,27 +204,45 @@ export function VenueForm<Parsed extends object>({
             />
           </FieldCell>
           <FieldCell>
-            <Input control={any} name="phone" label="Phone (optional)" inputMode="tel" />
+            <FormText
+              {...field}
+              name="phone"
+              testID="venue-phone"
+              label="Phone (optional)"
+              inputMode="tel"
+            />
           </FieldCell>
         </FieldRow>
-        <Input control={any} name="addressLine1" label="Address (optional)" />
-        <Input control={any} name="addressLine2" label="Address, second line (optional)" />
+        <FormText
+          {...field}
+          name="addressLine1"
+          testID="venue-addressLine1"
+          label="Address (optional)"
+        />
+        <FormText
+          {...field}
+          name="addressLine2"
+          testID="venue-addressLine2"
+          label="Address, second line (optional)"
+        />
         <FieldRow>
           <FieldCell>
-            <Input control={any} name="town" label="Town (optional)" />
+            <FormText {...field} name="town" testID="venue-town" label="Town (optional)" />
           </FieldCell>
           <FieldCell basis={140}>
-            <Input
-              control={any}
+            <FormText
+              {...field}
               name="postcode"
+              testID="venue-postcode"
               label="Postcode (optional)"
               autoCapitalize="characters"
             />
           </FieldCell>
           <FieldCell basis={120}>
-            <Input
-              control={any}
+            <FormText
+              {...field}
               name="country"
+              testID="venue-country"
               label="Country"
               hint="Two letters, e.g. GB"
               autoCapitalize="characters"
@@ -279,9 +250,10 @@ export function VenueForm<Parsed extends object>({
             />
           </FieldCell>
         </FieldRow>
-        <Input
-          control={any}
+        <FormText
+          {...field}
           name="vatNumber"
+          testID="venue-vatNumber"
           label="Venue’s VAT number (optional)"
           autoCapitalize="characters"
         />
@@ -296,7 +268,7 @@ export function VenueForm<Parsed extends object>({
 
       <Card style={styles.section}>
         <Heading level={2}>Notes</Heading>
-        <Input control={any} name="notes" label="Notes (optional)" multiline />
+        <FormText {...field} name="notes" testID="venue-notes" label="Notes (optional)" multiline />
       </Card>
 
       <FormFooter
@@ -305,7 +277,7 @@ export function VenueForm<Parsed extends object>({
         submitLabel={submitLabel}
         busyLabel="Saving…"
         busy={formState.isSubmitting}
-        onSubmit={submit}
+        onSubmit={submit(onSubmit)}
       />
     </View>
   );

@@ -18,7 +18,7 @@ import { type Work } from '@/shared/schemas/work';
 
 import { usePendingPhotos } from './pending-photos';
 import { WorkForm } from './work-form';
-import { emptyWorkValues, workCreateResolver } from './work-form-values';
+import { emptyWorkValues, workBinding } from './work-form-values';
 
 export function WorkCreateScreen() {
   const router = useRouter();
@@ -58,7 +58,7 @@ export function WorkCreateScreen() {
         <WorkForm
           mode="create"
           defaultValues={emptyWorkValues(studio.data.nextStockNumber)}
-          resolver={workCreateResolver(studio.data.currency)}
+          binding={workBinding('create', studio.data.currency)}
           currency={studio.data.currency}
           submitLabel={photos.files.length > 0 ? 'Save work and photos' : 'Save work'}
           busyLabel={progress === null ? 'Saving…' : 'Sending photos…'}

@@ -11,7 +11,7 @@ import { useWorkQuery, useWorkUpdateMutation } from '@/hooks/queries/works';
 
 import { PhotoManager } from './photo-manager';
 import { WorkForm } from './work-form';
-import { workUpdateResolver, workValues } from './work-form-values';
+import { workBinding, workValues } from './work-form-values';
 
 export function WorkEditScreen({ id }: { id: number }) {
   const router = useRouter();
@@ -41,7 +41,7 @@ export function WorkEditScreen({ id }: { id: number }) {
           <WorkForm
             mode="update"
             defaultValues={workValues(work.data)}
-            resolver={workUpdateResolver(work.data.retailPrice.currency)}
+            binding={workBinding('update', work.data.retailPrice.currency)}
             currency={work.data.retailPrice.currency}
             submitLabel="Save changes"
             busyLabel="Saving…"

@@ -1,13 +1,6 @@
-import { zodResolver } from '@hookform/resolvers/zod';
-import { type Resolver } from 'react-hook-form';
-
-import {
-  moneyText,
-  numberText,
-  parseMoneyText,
-  wholeNumberValue,
-} from '@/components/ui/decimal-text';
-import { liftErrors, messagesToErrors } from '@/components/ui/form-errors';
+import { moneyText, numberText } from '@/components/ui/decimal-text';
+import { bindForm, type FieldBindings, type FormBinding } from '@/components/ui/form/binding';
+import { choiceCodec, moneyCodec, numberCodec, textCodec } from '@/components/ui/form/codecs';
 import {
   type FoodUse,
   type Work,
@@ -16,7 +9,6 @@ import {
   type WorkUpdateParsed,
   workUpdateSchema,
 } from '@/shared/schemas/work';
-import { importFields } from '@/shared/schemas/work-import';
 
 /** What the form holds: text as typed, turned into the shared schema's shape when checked. */
 export type WorkFormValues = {
@@ -40,23 +32,6 @@ export type WorkFormValues = {
   careNotes: string;
   notes: string;
 };
-export type WorkField = keyof WorkFormValues;
-
-/** Every field of the form is one a spreadsheet column can map to, and the other way round. */
-const workFields: readonly WorkField[] = importFields;
-
-const numberFields = ['year', 'firingTempC', 'heightMm', 'widthMm', 'depthMm', 'weightG'] as const;
-const textFields = [
-  'title',
-  'series',
-  'category',
-  'clayBody',
-  'glaze',
-  'atmosphere',
-  'kiln',
-  'careNotes',
-  'notes',
-] as const;
 
 export function emptyWorkValues(stockNumber = ''): WorkFormValues {
   return {
@@ -106,78 +81,45 @@ export function workValues(work: Work): WorkFormValues {
   };
 }
 
-type Converted = { input: Record<string, unknown>; messages: Record<string, string> };
-
 /**
- * The form's text as the request body: numbers as numbers, amounts in exact minor units, a blank
- * stock number left out on create so the server makes one. Text that cannot be read as a number
- * or an amount gets a message here; everything else is the shared schema's to judge.
+ * How each field reaches the request body. On create a blank stock number is left out so the
+ * server makes the next one; on edit it must stay filled.
  */
-export function toWorkInput(
-  values: WorkFormValues,
+export function workBinding(
+  mode: 'create',
   currency: string,
-  mode: 'create' | 'update',
-): Converted {
-  const input: Record<string, unknown> = {};
-  const messages: Record<string, string> = {};
-  const stockNumber = values.stockNumber.trim();
-  if (mode === 'update' || stockNumber !== '') input.stockNumber = stockNumber;
-  for (const field of textFields) input[field] = values[field];
-  for (const field of numberFields) input[field] = wholeNumberValue(values[field]);
-  input.foodUse = values.foodUse;
-
-  const retail = parseMoneyText(values.retailPrice, currency);
-  if (retail.kind === 'ok') input.retailPrice = retail.value;
-  else messages.retailPrice = retail.kind === 'empty' ? 'Enter the retail price.' : retail.message;
-
-  const cost = parseMoneyText(values.costPrice, currency);
-  if (cost.kind === 'ok') input.costPrice = cost.value;
-  else if (cost.kind === 'empty') input.costPrice = null;
-  else messages.costPrice = cost.message;
-  return { input, messages };
-}
-
-/** A schema path from the server or zod (`retailPrice.amount`) to the form field showing it. */
-export function workFieldFor(path: string): WorkField | undefined {
-  const top = path.split('.')[0];
-  return workFields.find((field) => field === top);
-}
-
-function composeResolver<Parsed extends object>(
-  mode: 'create' | 'update',
+): FormBinding<WorkFormValues, WorkCreateParsed>;
+export function workBinding(
+  mode: 'update',
   currency: string,
-  check: Resolver<Record<string, unknown>, unknown, Parsed>,
-): Resolver<WorkFormValues, unknown, Parsed> {
-  return async (values, context, options) => {
-    const { input, messages } = toWorkInput(values, currency, mode);
-    const result = await check(input, context, options as never);
-    const errors = { ...liftErrors(result.errors, workFieldFor), ...messagesToErrors(messages) };
-    if (Object.keys(errors).length > 0) return { values: {}, errors };
-    return { values: result.values as Parsed, errors: {} };
+): FormBinding<WorkFormValues, WorkUpdateParsed>;
+export function workBinding(mode: 'create' | 'update', currency: string) {
+  const money = moneyCodec(currency);
+  const fields: FieldBindings<WorkFormValues> = {
+    stockNumber: {
+      read: textCodec,
+      blank: mode === 'create' ? 'omit' : { required: 'Enter a stock number.' },
+    },
+    title: { read: textCodec, blank: { required: 'Enter a title.' } },
+    year: { read: numberCodec },
+    series: { read: textCodec },
+    category: { read: textCodec },
+    clayBody: { read: textCodec },
+    glaze: { read: textCodec },
+    firingTempC: { read: numberCodec },
+    atmosphere: { read: textCodec },
+    kiln: { read: textCodec },
+    heightMm: { read: numberCodec },
+    widthMm: { read: numberCodec },
+    depthMm: { read: numberCodec },
+    weightG: { read: numberCodec },
+    retailPrice: { read: money, blank: { required: 'Enter the retail price.' } },
+    costPrice: { read: money },
+    foodUse: { read: choiceCodec },
+    careNotes: { read: textCodec },
+    notes: { read: textCodec },
   };
-}
-
-/** react-hook-form checks the converted values with the shared create schema. */
-export function workCreateResolver(currency: string) {
-  return composeResolver<WorkCreateParsed>(
-    'create',
-    currency,
-    zodResolver(workCreateSchema) as unknown as Resolver<
-      Record<string, unknown>,
-      unknown,
-      WorkCreateParsed
-    >,
-  );
-}
-
-export function workUpdateResolver(currency: string) {
-  return composeResolver<WorkUpdateParsed>(
-    'update',
-    currency,
-    zodResolver(workUpdateSchema) as unknown as Resolver<
-      Record<string, unknown>,
-      unknown,
-      WorkUpdateParsed
-    >,
-  );
+  return mode === 'create'
+    ? bindForm<WorkFormValues, WorkCreateParsed>(workCreateSchema, fields)
+    : bindForm<WorkFormValues, WorkUpdateParsed>(workUpdateSchema, fields);
 }

@@ -1,107 +1,20 @@
 import { type ReactNode } from 'react';
-import {
-  type Control,
-  Controller,
-  type Resolver,
-  type SubmitHandler,
-  useForm,
-  useWatch,
-} from 'react-hook-form';
+import { useWatch } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 
 import { Card } from '@/components/ui/card';
-import { Choice } from '@/components/ui/choice';
 import { FieldCell, FieldRow } from '@/components/ui/field-row';
-import { serverErrors } from '@/components/ui/form-errors';
+import { type FormBinding } from '@/components/ui/form/binding';
+import { FormChoice, FormMoney, FormNumber, FormText } from '@/components/ui/form/fields';
+import { useSchemaForm } from '@/components/ui/form/use-schema-form';
 import { FormFooter } from '@/components/ui/form-footer';
-import { MoneyField } from '@/components/ui/money-field';
-import { NumberField } from '@/components/ui/number-field';
 import { Heading, Text } from '@/components/ui/text';
-import { TextField } from '@/components/ui/text-field';
 import { spacing } from '@/constants/theme';
 import { type FoodUse } from '@/shared/schemas/work';
 
 import { ConeHint } from './cone-hint';
 import { foodSafeNote } from './food-use-note';
-import { type WorkField, workFieldFor, type WorkFormValues } from './work-form-values';
-
-type FieldProps = {
-  control: Control<WorkFormValues, unknown, object>;
-  name: Exclude<WorkField, 'foodUse'>;
-  label: string;
-  hint?: string;
-};
-
-function PlainField({
-  control,
-  name,
-  label,
-  hint,
-  multiline = false,
-}: FieldProps & { multiline?: boolean }) {
-  return (
-    <Controller
-      control={control}
-      name={name}
-      render={({ field, fieldState }) => (
-        <TextField
-          ref={field.ref}
-          testID={`work-${name}`}
-          label={label}
-          hint={hint}
-          value={field.value}
-          onChangeText={field.onChange}
-          onBlur={field.onBlur}
-          error={fieldState.error?.message}
-          multiline={multiline}
-        />
-      )}
-    />
-  );
-}
-
-function MeasureField({ control, name, label, unit }: FieldProps & { unit: string }) {
-  return (
-    <Controller
-      control={control}
-      name={name}
-      render={({ field, fieldState }) => (
-        <NumberField
-          ref={field.ref}
-          testID={`work-${name}`}
-          label={label}
-          unit={unit}
-          value={field.value}
-          onChangeText={field.onChange}
-          onBlur={field.onBlur}
-          error={fieldState.error?.message}
-        />
-      )}
-    />
-  );
-}
-
-function PriceField({ control, name, label, hint, currency }: FieldProps & { currency: string }) {
-  return (
-    <Controller
-      control={control}
-      name={name}
-      render={({ field, fieldState }) => (
-        <MoneyField
-          ref={field.ref}
-          testID={`work-${name}`}
-          label={label}
-          hint={hint}
-          currency={currency}
-          value={field.value}
-          onChangeText={field.onChange}
-          onBlur={field.onBlur}
-          error={fieldState.error?.message}
-        />
-      )}
-    />
-  );
-}
+import { type WorkFormValues } from './work-form-values';
 
 const foodUseOptions: { value: FoodUse; label: string }[] = [
   { value: 'food-safe', label: 'Food-safe (my declaration)' },
@@ -118,10 +31,10 @@ function Section({ title, children }: { title: string; children: ReactNode }) {
   );
 }
 
-type WorkFormProps<Parsed extends object> = {
+type WorkFormProps<Parsed> = {
   mode: 'create' | 'update';
   defaultValues: WorkFormValues;
-  resolver: Resolver<WorkFormValues, unknown, Parsed>;
+  binding: FormBinding<WorkFormValues, Parsed>;
   currency: string;
   /** Throws the server's error, which the form places on its fields. */
   onSubmit: (values: Parsed) => Promise<void>;
@@ -134,10 +47,10 @@ type WorkFormProps<Parsed extends object> = {
 };
 
 /** Every field of a work, grouped as a maker thinks of them; used to create and to edit. */
-export function WorkForm<Parsed extends object>({
+export function WorkForm<Parsed>({
   mode,
   defaultValues,
-  resolver,
+  binding,
   currency,
   onSubmit,
   submitLabel,
@@ -145,32 +58,20 @@ export function WorkForm<Parsed extends object>({
   photos,
   afterNotice,
 }: WorkFormProps<Parsed>) {
-  const { control, handleSubmit, setError, formState } = useForm<WorkFormValues, unknown, Parsed>({
-    resolver,
-    defaultValues,
-  });
+  const { control, formState, submit } = useSchemaForm(binding, defaultValues);
   const firing = useWatch({ control, name: 'firingTempC' });
   const foodUse = useWatch({ control, name: 'foodUse' });
-  const plainControl = control as unknown as Control<WorkFormValues, unknown, object>;
-
-  const save: SubmitHandler<Parsed> = async (values) => {
-    try {
-      await onSubmit(values);
-    } catch (error) {
-      const message = serverErrors(error, workFieldFor, (field, e) => setError(field, e));
-      if (message !== null) setError('root.server', { message });
-    }
-  };
-  const submit = handleSubmit(save);
+  const field = { control } as const;
 
   return (
     <View style={styles.form} role="form" aria-label={mode === 'create' ? 'New work' : 'Edit work'}>
       <Section title="The piece">
         <FieldRow>
           <FieldCell basis={160}>
-            <PlainField
-              control={plainControl}
+            <FormText
+              {...field}
               name="stockNumber"
+              testID="work-stockNumber"
               label="Stock number"
               hint={
                 mode === 'create' ? 'The next in your pattern; change it if you like.' : undefined
@@ -178,18 +79,19 @@ export function WorkForm<Parsed extends object>({
             />
           </FieldCell>
           <FieldCell basis={120}>
-            <MeasureField control={plainControl} name="year" label="Year made" unit="" />
+            <FormNumber {...field} name="year" testID="work-year" label="Year made" unit="" />
           </FieldCell>
         </FieldRow>
-        <PlainField control={plainControl} name="title" label="Title" />
+        <FormText {...field} name="title" testID="work-title" label="Title" />
         <FieldRow>
           <FieldCell basis={180}>
-            <PlainField control={plainControl} name="series" label="Series (optional)" />
+            <FormText {...field} name="series" testID="work-series" label="Series (optional)" />
           </FieldCell>
           <FieldCell basis={180}>
-            <PlainField
-              control={plainControl}
+            <FormText
+              {...field}
               name="category"
+              testID="work-category"
               label="Category (optional)"
               hint="Jar, bowl, vase…"
             />
@@ -200,32 +102,35 @@ export function WorkForm<Parsed extends object>({
       <Section title="Materials and firing">
         <FieldRow>
           <FieldCell basis={200}>
-            <PlainField control={plainControl} name="clayBody" label="Clay body" />
+            <FormText {...field} name="clayBody" testID="work-clayBody" label="Clay body" />
           </FieldCell>
           <FieldCell basis={200}>
-            <PlainField control={plainControl} name="glaze" label="Glaze" />
+            <FormText {...field} name="glaze" testID="work-glaze" label="Glaze" />
           </FieldCell>
         </FieldRow>
-        <MeasureField
-          control={plainControl}
+        <FormNumber
+          {...field}
           name="firingTempC"
+          testID="work-firingTempC"
           label="Firing temperature"
           unit="°C"
         />
         <ConeHint temperatureText={firing} />
         <FieldRow>
           <FieldCell basis={200}>
-            <PlainField
-              control={plainControl}
+            <FormText
+              {...field}
               name="atmosphere"
+              testID="work-atmosphere"
               label="Atmosphere"
               hint="Oxidation, reduction, soda…"
             />
           </FieldCell>
           <FieldCell basis={200}>
-            <PlainField
-              control={plainControl}
+            <FormText
+              {...field}
               name="kiln"
+              testID="work-kiln"
               label="Kiln type"
               hint="Electric, gas, wood…"
             />
@@ -236,16 +141,22 @@ export function WorkForm<Parsed extends object>({
       <Section title="Size and weight">
         <FieldRow>
           <FieldCell basis={140}>
-            <MeasureField control={plainControl} name="heightMm" label="Height" unit="mm" />
+            <FormNumber
+              {...field}
+              name="heightMm"
+              testID="work-heightMm"
+              label="Height"
+              unit="mm"
+            />
           </FieldCell>
           <FieldCell basis={140}>
-            <MeasureField control={plainControl} name="widthMm" label="Width" unit="mm" />
+            <FormNumber {...field} name="widthMm" testID="work-widthMm" label="Width" unit="mm" />
           </FieldCell>
           <FieldCell basis={140}>
-            <MeasureField control={plainControl} name="depthMm" label="Depth" unit="mm" />
+            <FormNumber {...field} name="depthMm" testID="work-depthMm" label="Depth" unit="mm" />
           </FieldCell>
           <FieldCell basis={140}>
-            <MeasureField control={plainControl} name="weightG" label="Weight" unit="g" />
+            <FormNumber {...field} name="weightG" testID="work-weightG" label="Weight" unit="g" />
           </FieldCell>
         </FieldRow>
       </Section>
@@ -253,18 +164,20 @@ export function WorkForm<Parsed extends object>({
       <Section title="Price">
         <FieldRow>
           <FieldCell basis={180}>
-            <PriceField
-              control={plainControl}
+            <FormMoney
+              {...field}
               name="retailPrice"
+              testID="work-retailPrice"
               label="Retail price"
-              hint="What a buyer pays, in pounds and pence."
+              hint={`What a buyer pays, in ${currency}.`}
               currency={currency}
             />
           </FieldCell>
           <FieldCell basis={180}>
-            <PriceField
-              control={plainControl}
+            <FormMoney
+              {...field}
               name="costPrice"
+              testID="work-costPrice"
               label="Cost (optional)"
               hint="Never shown to venues."
               currency={currency}
@@ -274,28 +187,22 @@ export function WorkForm<Parsed extends object>({
       </Section>
 
       <Section title="Food use and care">
-        <Controller
-          control={control}
+        <FormChoice
+          {...field}
           name="foodUse"
-          render={({ field, fieldState }) => (
-            <Choice
-              testID="work-foodUse"
-              label="Food use"
-              options={foodUseOptions}
-              value={field.value}
-              onChange={field.onChange}
-              error={fieldState.error?.message}
-            />
-          )}
+          testID="work-foodUse"
+          label="Food use"
+          options={foodUseOptions}
         />
         <Text variant="small">
           {foodUse === 'food-safe'
             ? foodSafeNote
             : 'Shown and labelled as “decorative — not for food use”.'}
         </Text>
-        <PlainField
-          control={plainControl}
+        <FormText
+          {...field}
           name="careNotes"
+          testID="work-careNotes"
           label="Care notes (optional)"
           hint="Printed on labels: washing, display, handling."
           multiline
@@ -303,9 +210,10 @@ export function WorkForm<Parsed extends object>({
       </Section>
 
       <Section title="Notes">
-        <PlainField
-          control={plainControl}
+        <FormText
+          {...field}
           name="notes"
+          testID="work-notes"
           label="Notes for the studio (optional)"
           multiline
         />
@@ -319,7 +227,7 @@ export function WorkForm<Parsed extends object>({
         submitLabel={submitLabel}
         busyLabel={busyLabel}
         busy={formState.isSubmitting}
-        onSubmit={submit}
+        onSubmit={submit(onSubmit)}
       >
         {afterNotice}
       </FormFooter>

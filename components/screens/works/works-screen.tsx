@@ -15,15 +15,11 @@ import { Heading, Text } from '@/components/ui/text';
 import { TextField } from '@/components/ui/text-field';
 import { workStatusLooks } from '@/constants/states';
 import { spacing } from '@/constants/theme';
-import {
-  useWorkFacetsQuery,
-  useWorksQuery,
-  worksExportPath,
-  type WorksFilter,
-} from '@/hooks/queries/works';
+import { useWorkFacetsQuery, useWorksQuery, worksExportPath } from '@/hooks/queries/works';
 import { useBreakpoint } from '@/hooks/use-breakpoint';
 import {
   type Work,
+  type WorkListQuery,
   type WorkSort,
   workSortSchema,
   type WorkStatus,
@@ -91,7 +87,7 @@ export function WorksScreen() {
   const page = paging.key === filterKey ? paging.page : 1;
   const setPage = (next: number) => setPaging({ key: filterKey, page: next });
 
-  const filters: WorksFilter = {
+  const filters: WorkListQuery = {
     search: search || undefined,
     status: status || undefined,
     series: series || undefined,

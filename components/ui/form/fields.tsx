@@ -1,0 +1,96 @@
+import {
+  type Control,
+  type FieldPathByValue,
+  type FieldValues,
+  useController,
+} from 'react-hook-form';
+
+import { Choice, type ChoiceOption } from '../choice';
+import { DateField } from '../date-field';
+import { MoneyField } from '../money-field';
+import { NumberField } from '../number-field';
+import { TextField, type TextFieldProps } from '../text-field';
+
+/** What every bound field takes: the form's control and the name of a field holding text. */
+type Bound<Values extends FieldValues, Body> = {
+  control: Control<Values, unknown, Body>;
+  name: FieldPathByValue<Values, string>;
+  label: string;
+  testID: string;
+  hint?: string;
+};
+
+type TextLike = Omit<
+  TextFieldProps,
+  'value' | 'onChangeText' | 'onBlur' | 'error' | 'ref' | 'label' | 'testID' | 'hint'
+>;
+
+function useBoundText<Values extends FieldValues, Body>(props: Bound<Values, Body>) {
+  const { field, fieldState } = useController({ control: props.control, name: props.name });
+  return {
+    ref: field.ref,
+    testID: props.testID,
+    label: props.label,
+    hint: props.hint,
+    // The name is a path whose value is text, so the value is the text typed.
+    value: field.value as string,
+    onChangeText: field.onChange,
+    onBlur: field.onBlur,
+    error: fieldState.error?.message,
+  };
+}
+
+/** Text, as typed. */
+export function FormText<Values extends FieldValues, Body>({
+  control,
+  name,
+  label,
+  testID,
+  hint,
+  ...input
+}: Bound<Values, Body> & TextLike) {
+  const bound = useBoundText({ control, name, label, testID, hint });
+  return <TextField {...input} {...bound} />;
+}
+
+/** An amount in major units, with the currency's symbol. */
+export function FormMoney<Values extends FieldValues, Body>({
+  currency,
+  ...props
+}: Bound<Values, Body> & { currency: string }) {
+  return <MoneyField {...useBoundText(props)} currency={currency} />;
+}
+
+/** A number, with its unit beside it. */
+export function FormNumber<Values extends FieldValues, Body>({
+  unit,
+  decimal,
+  ...props
+}: Bound<Values, Body> & { unit?: string; decimal?: boolean }) {
+  return <NumberField {...useBoundText(props)} unit={unit} decimal={decimal} />;
+}
+
+/** A calendar date. */
+export function FormDate<Values extends FieldValues, Body>(props: Bound<Values, Body>) {
+  const { label, testID, hint, value, onChangeText, onBlur, error } = useBoundText(props);
+  return <DateField {...{ label, testID, hint, value, onBlur, error }} onChange={onChangeText} />;
+}
+
+/** One of a few choices, all in view. */
+export function FormChoice<Values extends FieldValues, Body>({
+  options,
+  ...props
+}: Bound<Values, Body> & { options: readonly ChoiceOption<string>[] }) {
+  const { field, fieldState } = useController({ control: props.control, name: props.name });
+  return (
+    <Choice
+      testID={props.testID}
+      label={props.label}
+      hint={props.hint}
+      options={options}
+      value={field.value as string}
+      onChange={field.onChange}
+      error={fieldState.error?.message}
+    />
+  );
+}
