@@ -1,18 +1,19 @@
-import { tz } from '@date-fns/tz';
-import { utc, type UTCDate } from '@date-fns/utc';
-import {
-  addDays as addCalendarDays,
-  addMonths as addCalendarMonths,
-  differenceInCalendarDays,
-  differenceInCalendarMonths,
-  formatISO,
-  getDate,
-  getMonth,
-  getYear,
-  isValid,
-  lastDayOfMonth,
-  parseISO,
-} from 'date-fns';
+// One module per function: Metro does not tree-shake, and the app reaches this file through the
+// VAT rules, so importing from the packages' roots would bundle every date-fns function.
+import { tz } from '@date-fns/tz/tz';
+import { type UTCDate } from '@date-fns/utc/date';
+import { utc } from '@date-fns/utc/utc';
+import { addDays as addCalendarDays } from 'date-fns/addDays';
+import { addMonths as addCalendarMonths } from 'date-fns/addMonths';
+import { differenceInCalendarDays } from 'date-fns/differenceInCalendarDays';
+import { differenceInCalendarMonths } from 'date-fns/differenceInCalendarMonths';
+import { formatISO } from 'date-fns/formatISO';
+import { getDate } from 'date-fns/getDate';
+import { getMonth } from 'date-fns/getMonth';
+import { getYear } from 'date-fns/getYear';
+import { isValid } from 'date-fns/isValid';
+import { lastDayOfMonth } from 'date-fns/lastDayOfMonth';
+import { parseISO } from 'date-fns/parseISO';
 
 import { MoneyRuleError } from './errors';
 
