@@ -78,6 +78,14 @@ export function buildStatement(input: StatementInput): Statement {
     throw new MoneyRuleError('invalid-date', 'The statement period ends before it starts.');
   }
 
+  // Many sales share a date, and reading a date is the costly part of checking it: once each.
+  const checkedDates = new Set<IsoDate>();
+  const checkDate = (date: IsoDate) => {
+    if (checkedDates.has(date)) return;
+    assertIsoDate(date);
+    checkedDates.add(date);
+  };
+
   const sums = { sales: 0, commission: 0, vat: 0, share: 0, output: 0, reclaim: 0 };
   let opening = 0;
   const lines: StatementLine[] = [];
@@ -86,7 +94,7 @@ export function buildStatement(input: StatementInput): Statement {
   for (const line of input.lines) {
     if (line.sale === null) continue;
     const { date, price } = line.sale;
-    assertIsoDate(date);
+    checkDate(date);
     if (date > period.to) continue;
     const lineTerms = line.terms ?? terms;
     if (lineTerms.currency !== currency) {
@@ -125,7 +133,7 @@ export function buildStatement(input: StatementInput): Statement {
   let paid = 0;
   const payments: StatementPayment[] = [];
   for (const payment of input.payments) {
-    assertIsoDate(payment.date);
+    checkDate(payment.date);
     assertCurrency(payment.amount, currency);
     if (payment.date > period.to) continue;
     if (payment.date < period.from) opening -= payment.amount.amount;

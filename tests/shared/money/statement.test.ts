@@ -123,6 +123,26 @@ describe('buildStatement', () => {
     );
   });
 
+  it('refuses a sale or payment dated on a day that does not exist, however many share its month', () => {
+    const october = { terms, period: { from: '2024-10-01', to: '2024-10-31' } };
+    const invalid = (date: string) =>
+      expect.objectContaining({
+        code: 'invalid-date',
+        message: `“${date}” is not a date written as YYYY-MM-DD.`,
+      });
+    const lines = [sold(1, '2024-10-02', 100), sold(2, '2024-10-02', 100)];
+    expect(() =>
+      buildStatement({ ...october, lines: [...lines, sold(3, '2024-09-31', 100)], payments: [] }),
+    ).toThrow(invalid('2024-09-31'));
+    expect(() =>
+      buildStatement({
+        ...october,
+        lines,
+        payments: [{ id: 1, date: '2024-10-2', amount: gbp(100) }],
+      }),
+    ).toThrow(invalid('2024-10-2'));
+  });
+
   it('refuses payment terms from the closing without a closing date', () => {
     const closingTerms: Terms = { ...terms, paymentTerms: { days: 30, from: 'closing' } };
     expect(() =>
