@@ -31,7 +31,10 @@ export async function storeDemoPhotos(filesDir: string): Promise<DemoPhoto[][]> 
   return demoWorks.map((_, index) => photos.filter((_, i) => shots[i]!.index === index));
 }
 
-/** Runs `task` over the items, at most `limit` at once, keeping the results in order. */
+/**
+ * Runs `task` over the items, at most `limit` at once, keeping the results in order. After a
+ * failure no new task starts, and it rejects only once those under way have finished.
+ */
 async function mapLimited<T, R>(
   items: readonly T[],
   limit: number,
@@ -39,12 +42,21 @@ async function mapLimited<T, R>(
 ): Promise<R[]> {
   const results: R[] = [];
   let next = 0;
+  let failed = false;
   const worker = async () => {
-    while (next < items.length) {
+    while (next < items.length && !failed) {
       const i = next++;
-      results[i] = await task(items[i]!);
+      try {
+        results[i] = await task(items[i]!);
+      } catch (err) {
+        failed = true;
+        throw err;
+      }
     }
   };
-  await Promise.all(Array.from({ length: Math.max(1, Math.min(limit, items.length)) }, worker));
+  const workers = Array.from({ length: Math.max(1, Math.min(limit, items.length)) }, worker);
+  const outcomes = await Promise.allSettled(workers);
+  const failure = outcomes.find((o) => o.status === 'rejected');
+  if (failure) throw failure.reason;
   return results;
 }

@@ -27,6 +27,11 @@ beforeAll(async () => {
   await seedDemoIfEmpty(seeded.db, { filesDir: seeded.context.filesDir });
 }, seedTimeout);
 
+afterAll(async () => {
+  await seeded.db.destroy();
+  fs.rmSync(seeded.context.filesDir, { recursive: true, force: true });
+});
+
 function filesUnder(dir: string): string[] {
   if (!fs.existsSync(dir)) return [];
   return fs
@@ -37,11 +42,19 @@ function filesUnder(dir: string): string[] {
 }
 
 async function rowCounts(db: TestApp['db']) {
-  const tables = ['users', 'studios', 'venues', 'works', 'files', 'work_photos', 'consignments'];
+  const tables = [
+    'users',
+    'studios',
+    'venues',
+    'works',
+    'files',
+    'work_photos',
+    'consignments',
+  ] as const;
   const counts: Record<string, number> = {};
   for (const table of tables) {
     const { n } = await db
-      .selectFrom(table as 'works')
+      .selectFrom(table)
       .select((e) => e.fn.countAll().as('n'))
       .executeTakeFirstOrThrow();
     counts[table] = Number(n);
