@@ -30,7 +30,7 @@ export function mottle(box: Box, pen: Pen): string {
     `${glaze.flash ? fadeGradient(`${id}-flash`, glaze.flash) : ''}</defs>` +
     blots('thick', 5, 0.22, 0.35) +
     blots('thin', 4, 0.18, 0.3) +
-    (glaze.flash ? blots('flash', 3, 0.3, 0.8, side, side + 0.55) : '')
+    (glaze.flash ? blots('flash', 4, 0.34, 0.5, side, side + 0.55) : '')
   );
 }
 
