@@ -6,7 +6,6 @@ import { crackle, mottle, type Pen, runs, speckles } from './glaze-surface';
 import { type Glaze } from './glazes';
 import {
   type Box,
-  curveThrough,
   type Drawing,
   ellipse,
   mix,
@@ -34,14 +33,14 @@ export function thrownPot(
   const elevation = ((view === 'above' ? 58 : form.elevation) * Math.PI) / 180;
   const flat = Math.sin(elevation) * roundness;
   const rise = Math.cos(elevation);
-  const footR = form.profile[0]![1];
-  const rimR = form.profile[form.profile.length - 1]![1];
-
-  // Above the foot's centre: the rim's back; below it: the foot's front, or the rim's from high up.
-  const aboveMm = heightMm * rise + (rimR * bodyMm * flat) / 2;
+  // Level slices up the pot, foot to rim: each a ring, seen as an ellipse from above.
+  const heights = Array.from({ length: 49 }, (_, i) => i / 48);
+  const shares = heights.map((t) => profileAt(form.profile, t));
+  const aboveMm = Math.max(
+    ...heights.map((t, i) => t * heightMm * rise + (shares[i]! * bodyMm * flat) / 2),
+  );
   const belowMm = Math.max(
-    (footR * bodyMm * flat) / 2,
-    (rimR * bodyMm * flat) / 2 - heightMm * rise,
+    ...heights.map((t, i) => (shares[i]! * bodyMm * flat) / 2 - t * heightMm * rise),
   );
   const scale = Math.min(stage.maxW / (bodyMm + reachMm), stage.maxH / (aboveMm + belowMm));
   const half = (bodyMm / 2) * scale;
@@ -50,21 +49,33 @@ export function thrownPot(
   const at = (t: number) => footY - t * heightMm * rise * scale;
   const radiusAt = (t: number) => half * profileAt(form.profile, t);
 
-  const rings = form.profile.map(([t, r]) => ({ y: at(t), r: r * half }));
-  const foot = rings[0]!;
+  const rings = heights.map((t, i) => ({ y: at(t), r: shares[i]! * half }));
   const rim = rings[rings.length - 1]!;
   const widest = Math.max(...rings.map((p) => p.r));
-  const left = rings.map((p): Point => [cx - p.r, p.y]).reverse();
-  const right = rings.map((p): Point => [cx + p.r, p.y]);
-  const outline =
-    `${smoothPath(left)}A${n(foot.r)} ${n(foot.r * flat)} 0 0 0 ${pt(right[0]!)}` +
-    `${curveThrough(right)}A${n(rim.r)} ${n(rim.r * flat)} 0 0 0 ${pt(left[0]!)}Z`;
-  const box: Box = {
-    x: cx - widest - 2,
-    y: rim.y - rim.r * flat - 2,
-    w: widest * 2 + 4,
-    h: footY + Math.max(foot.r, rim.r) * flat - rim.y + rim.r * flat + 4,
+  // The pot up to a height as one shape: down each side, the point on each ring where the wall
+  // turns away from view (the slope of the profile says where); the end rings close top and
+  // bottom, and a ring whose wall is hidden from the side (a plate's, from above) is added whole.
+  const climb = heightMm * rise * scale;
+  const solidUpTo = (limit: number) => {
+    const levels = [...heights.filter((t) => t < limit), limit];
+    const edge: Point[] = [];
+    let rings = '';
+    for (const [i, t] of levels.entries()) {
+      const r = radiusAt(t);
+      const turn = (((radiusAt(t + 0.001) - radiusAt(t - 0.001)) / 0.002) * flat) / climb;
+      if (Math.abs(turn) <= 1) edge.push([r * Math.sqrt(1 - turn ** 2), at(t) + r * flat * turn]);
+      if (Math.abs(turn) > 1 || i === 0 || i === levels.length - 1) {
+        rings += ellipse(cx, at(t), r, r * flat, '');
+      }
+    }
+    const left = edge.map(([x, y]): Point => [cx - x, y]);
+    const right = edge.map(([x, y]): Point => [cx + x, y]).reverse();
+    return `<path d="M${[...left, ...right].map(pt).join('L')}Z"/>${rings}`;
   };
+  const solid = solidUpTo(1);
+  const top = Math.min(...rings.map((p) => p.y - p.r * flat));
+  const bottom = Math.max(...rings.map((p) => p.y + p.r * flat));
+  const box: Box = { x: cx - widest - 2, y: top - 2, w: widest * 2 + 4, h: bottom - top + 4 };
   const onSurface = (across: number, t: number): Point => [cx + across * radiusAt(t), at(t)];
 
   // The glaze stops short of the foot along the front of the pot, with a drip here and there.
@@ -74,19 +85,19 @@ export function thrownPot(
     const drip = pen.random() < 0.25 ? pen.random() * 0.018 * heightMm * scale : 0;
     return [cx + bareR * Math.cos(a), at(form.foot) + bareR * flat * Math.sin(a) + drip];
   });
-  const bottom = box.y + box.h;
-  const bare = `${smoothPath(glazeLine)}L${n(box.x + box.w)} ${n(bottom)}L${n(box.x)} ${n(bottom)}Z`;
+  const bare = `${smoothPath(glazeLine)}L${n(box.x + box.w)} ${n(bottom + 2)}L${n(box.x)} ${n(bottom + 2)}Z`;
   // A window's reflection, following the curve of the body on the lit side.
   const shine = smoothPath(
     Array.from({ length: 9 }, (_, i) => onSurface(-0.52, 0.3 + (i / 8) * 0.48)),
   );
 
   const parts = [
-    groundShadow(cx, footY, foot.r, foot.r * flat, widest),
+    groundShadow(cx, footY, rings[0]!.r, rings[0]!.r * flat, widest),
     form.handle ? handle(cx, radiusAt, at, heightMm * scale, reachMm * scale, glaze) : '',
-    `<defs><clipPath id="${id}-body"><path d="${outline}"/></clipPath>`,
+    `<defs><clipPath id="${id}-body">${solid}</clipPath>`,
+    `<clipPath id="${id}-foot">${solidUpTo(form.foot)}</clipPath>`,
     `${shadingGradients(id, glaze, box, at(1), footY)}</defs>`,
-    `<path d="${outline}" fill="${glaze.base}"/>`,
+    `<g fill="${glaze.base}">${solid}</g>`,
     `<g clip-path="url(#${id}-body)">`,
     rect(box, `url(#${id}-flow)`),
     mottle(box, pen),
@@ -94,7 +105,7 @@ export function thrownPot(
     crackle(box, scale, pen),
     speckles(box, scale, pen),
     /facet/i.test(work.title) ? facets(id, box) + rect(box, `url(#${id}-facets)`) : '',
-    `<path d="${bare}" fill="${pen.clay}"/>`,
+    `<path d="${bare}" fill="${pen.clay}" clip-path="url(#${id}-foot)"/>`,
     `<path d="${smoothPath(glazeLine)}" fill="none" stroke="${glaze.dark}" stroke-width="2" opacity="0.45"/>`,
     rect(box, `url(#${id}-form)`),
     rect(box, `url(#${id}-low)`),
@@ -105,7 +116,6 @@ export function thrownPot(
       .join(''),
     '</g>',
     '</g>',
-    `<path d="${outline}" fill="none" stroke="#2a1f17" stroke-width="1.2" opacity="0.25"/>`,
   ];
   const mouth = { cx, cy: rim.y, rx: rim.r, ry: rim.r * flat };
   if (form.mouth === 'open') {
@@ -239,8 +249,7 @@ function lid({ cx, cy, rx }: Mouth, flat: number, seamY: number, seamR: number, 
   const seam = (dy: number) =>
     `M${n(cx - seamR)} ${n(seamY + dy)}A${n(seamR)} ${n(seamR * flat)} 0 0 0 ${n(cx + seamR)} ${n(seamY + dy)}`;
   return (
-    ellipse(cx, cy, rx, rx * flat, `fill="${mix(glaze.base, glaze.light, 0.45)}"`) +
-    ellipse(cx, cy, rx, rx * flat, `fill="none" stroke="${glaze.edge}" stroke-width="2"`) +
+    ellipse(cx, cy, rx, rx * flat, `fill="${mix(glaze.base, glaze.light, 0.3)}"`) +
     `<path d="${seam(0)}" fill="none" stroke="#1d140e" stroke-width="2.5" opacity="0.5"/>` +
     `<path d="${seam(3)}" fill="none" stroke="#fff" stroke-width="1.2" opacity="0.3"/>` +
     ellipse(cx + knob * 0.3, cy + 2, knob * 1.5, knob * flat * 1.6, 'fill="url(#contact)"') +
@@ -272,26 +281,43 @@ function handle(
   );
 }
 
-/** A jug's pulled lip on the left of the rim. */
+/**
+ * A jug's pulled lip on the left: the rim drawn out to a point, its outside running down into the
+ * body in shade, its inside a channel for the pour.
+ */
 function spout({ cx, cy, rx, ry }: Mouth, glaze: Glaze) {
-  const s = rx * 0.4;
-  const tip: Point = [cx - rx - s, cy - s * 0.6];
-  const d =
-    `M${n(cx - rx * 0.55)} ${n(cy - ry * 0.85)}Q${n(cx - rx * 1.05)} ${n(cy - ry * 0.6)} ${pt(tip)}` +
-    `Q${n(cx - rx * 1.02)} ${n(cy + s * 0.35)} ${n(cx - rx * 0.8)} ${n(cy + ry * 0.65 + s * 0.3)}Z`;
-  const channel = `M${n(cx - rx * 0.6)} ${n(cy - ry * 0.2)}Q${n(cx - rx * 0.95)} ${n(cy - s * 0.2)} ${n(tip[0] + s * 0.25)} ${n(tip[1] + s * 0.1)}`;
+  const s = rx * 0.38;
+  const tip: Point = [cx - rx - s, cy - s * 0.55];
+  const back: Point = [cx - rx * 0.55, cy - ry * 0.84];
+  const front: Point = [cx - rx * 0.62, cy + ry * 0.78];
+  const below: Point = [cx - rx * 0.97, cy + ry + s * 0.9];
+  const outside =
+    `M${pt(front)}Q${n(cx - rx * 1.02)} ${n(cy + ry * 0.2)} ${pt(tip)}` +
+    `Q${n(cx - rx * 1.02)} ${n(cy + s * 0.4)} ${pt(below)}Z`;
+  const inside =
+    `M${pt(back)}Q${n(cx - rx * 1.02)} ${n(cy - ry * 0.75)} ${pt(tip)}` +
+    `Q${n(cx - rx * 0.98)} ${n(cy + ry * 0.1)} ${pt(front)}Z`;
   return (
-    `<path d="${d}" fill="${mix(glaze.base, glaze.dark, 0.15)}"/>` +
-    `<path d="${channel}" fill="none" stroke="${glaze.dark}" stroke-width="${n(s * 0.2)}" stroke-linecap="round" opacity="0.55"/>` +
-    `<path d="${d}" fill="none" stroke="${glaze.edge}" stroke-width="2"/>`
+    `<path d="${outside}" fill="${mix(glaze.base, glaze.dark, 0.45)}"/>` +
+    `<path d="${inside}" fill="${mix(glaze.base, glaze.dark, 0.2)}"/>` +
+    `<path d="M${pt(back)}Q${n(cx - rx * 1.02)} ${n(cy - ry * 0.75)} ${pt(tip)}Q${n(cx - rx * 1.02)} ${n(cy + ry * 0.2)} ${pt(front)}" fill="none" stroke="${glaze.edge}" stroke-width="${n(Math.max(2, rx * 0.025))}" stroke-linejoin="round"/>`
   );
 }
 
-/** The half-width at a height, between the profile's points. */
+/** The half-width at a height: a smooth curve through the profile's points (cubic Hermite). */
 function profileAt(profile: ThrownForm['profile'], t: number): number {
-  const i = profile.findIndex(([pt]) => pt >= t);
-  if (i <= 0) return profile[Math.max(i, 0)]![1];
-  const [t0, r0] = profile[i - 1]!;
-  const [t1, r1] = profile[i]!;
-  return r0 + ((r1 - r0) * (t - t0)) / (t1 - t0);
+  const after = profile.findIndex(([pt]) => pt >= t);
+  const i = after < 0 ? profile.length - 2 : Math.max(after - 1, 0);
+  const [p0, p1] = [profile[i]!, profile[i + 1]!];
+  const [before, beyond] = [profile[i - 1] ?? p0, profile[i + 2] ?? p1];
+  const span = p1[0] - p0[0];
+  const slope = (a: readonly number[], b: readonly number[]) => (b[1]! - a[1]!) / (b[0]! - a[0]!);
+  const [m0, m1] = [slope(before, p1) * span, slope(p0, beyond) * span];
+  const u = (t - p0[0]) / span;
+  return (
+    (2 * u ** 3 - 3 * u ** 2 + 1) * p0[1] +
+    (u ** 3 - 2 * u ** 2 + u) * m0 +
+    (-2 * u ** 3 + 3 * u ** 2) * p1[1] +
+    (u ** 3 - u ** 2) * m1
+  );
 }

@@ -20,7 +20,7 @@ const size = 1200;
 const centre = size / 2;
 const horizonY = 790;
 const plinthEdgeY = 1045;
-const stage: Stage = { cx: centre, groundY: 950, maxW: 760, maxH: 660 };
+const stage: Stage = { cx: centre, groundY: 985, maxW: 860, maxH: 760 };
 
 /** The second photograph worth taking: into a wide open pot from above, else its glaze close up. */
 export function secondViewFor(work: PictureWork): PictureView {
@@ -48,20 +48,20 @@ export function vesselSvg(work: PictureWork, view: PictureView): string {
   });
   let piece: Drawing;
   if (form.kind === 'wall-piece') {
-    piece = wallPiece(work, pen('w'), { cx: centre, groundY: 880, maxW: 840, maxH: 640 });
+    piece = wallPiece(work, pen('w'), { cx: centre, groundY: 920, maxW: 920, maxH: 700 });
   } else if (form.kind === 'standing') {
     piece = standingForm(work, pen('s'), stage);
   } else if (/^(a )?pair of/i.test(work.title)) {
     const pair = { ...stage, maxW: stage.maxW * 0.55 };
     const behind = thrownPot(work, form, view, pen('b'), {
       ...pair,
-      cx: centre + 150,
-      groundY: 910,
+      cx: centre + 165,
+      groundY: 940,
     });
     const front = thrownPot(work, form, view, pen('f'), {
       ...pair,
-      cx: centre - 120,
-      groundY: 975,
+      cx: centre - 135,
+      groundY: 1005,
     });
     piece = { svg: behind.svg + front.svg, focus: front.focus };
   } else {
@@ -83,14 +83,14 @@ export function vesselSvg(work: PictureWork, view: PictureView): string {
 
 const backdropDefs = `<defs>
 <linearGradient id="wall" x1="0" y1="0" x2="0" y2="1">
-<stop offset="0" stop-color="#d9d1c3"/><stop offset="1" stop-color="#efe9df"/></linearGradient>
+<stop offset="0" stop-color="#d2c9ba"/><stop offset="1" stop-color="#e8e1d5"/></linearGradient>
 <linearGradient id="sweep" x1="0" y1="0" x2="0" y2="1">
-<stop offset="0" stop-color="#d9d1c3"/><stop offset="0.6" stop-color="#eee8de"/>
-<stop offset="0.8" stop-color="#f2ede5"/><stop offset="1" stop-color="#e2dacd"/></linearGradient>
+<stop offset="0" stop-color="#d2c9ba"/><stop offset="0.6" stop-color="#e8e1d5"/>
+<stop offset="0.8" stop-color="#ece6dc"/><stop offset="1" stop-color="#ddd4c6"/></linearGradient>
 <linearGradient id="plinth" x1="0" y1="0" x2="0" y2="1">
-<stop offset="0" stop-color="#e6dfd3"/><stop offset="1" stop-color="#f3eee6"/></linearGradient>
+<stop offset="0" stop-color="#e0d8cb"/><stop offset="1" stop-color="#eee8de"/></linearGradient>
 <linearGradient id="face" x1="0" y1="0" x2="0" y2="1">
-<stop offset="0" stop-color="#d8cfbf"/><stop offset="1" stop-color="#cbc1af"/></linearGradient>
+<stop offset="0" stop-color="#cfc5b4"/><stop offset="1" stop-color="#c2b7a3"/></linearGradient>
 <radialGradient id="vignette" cx="0.5" cy="0.48" r="0.72">
 <stop offset="0.62" stop-color="#3b2c1e" stop-opacity="0"/>
 <stop offset="1" stop-color="#3b2c1e" stop-opacity="0.2"/></radialGradient>
