@@ -46,7 +46,8 @@ export function thrownPot(
   const half = (bodyMm / 2) * scale;
   const cx = stage.cx - (reachMm * scale) / 2 + (form.spout ? half * 0.15 : 0);
   const footY = stage.groundY - belowMm * scale;
-  const at = (t: number) => footY - t * heightMm * rise * scale;
+  const climb = heightMm * rise * scale;
+  const at = (t: number) => footY - t * climb;
   const radiusAt = (t: number) => half * profileAt(form.profile, t);
 
   const rings = heights.map((t, i) => ({ y: at(t), r: shares[i]! * half }));
@@ -55,22 +56,21 @@ export function thrownPot(
   // The pot up to a height as one shape: down each side, the point on each ring where the wall
   // turns away from view (the slope of the profile says where); the end rings close top and
   // bottom, and a ring whose wall is hidden from the side (a plate's, from above) is added whole.
-  const climb = heightMm * rise * scale;
   const solidUpTo = (limit: number) => {
     const levels = [...heights.filter((t) => t < limit), limit];
     const edge: Point[] = [];
-    let rings = '';
+    let caps = '';
     for (const [i, t] of levels.entries()) {
       const r = radiusAt(t);
       const turn = (((radiusAt(t + 0.001) - radiusAt(t - 0.001)) / 0.002) * flat) / climb;
       if (Math.abs(turn) <= 1) edge.push([r * Math.sqrt(1 - turn ** 2), at(t) + r * flat * turn]);
       if (Math.abs(turn) > 1 || i === 0 || i === levels.length - 1) {
-        rings += ellipse(cx, at(t), r, r * flat, '');
+        caps += ellipse(cx, at(t), r, r * flat, '');
       }
     }
     const left = edge.map(([x, y]): Point => [cx - x, y]);
     const right = edge.map(([x, y]): Point => [cx + x, y]).reverse();
-    return `<path d="M${[...left, ...right].map(pt).join('L')}Z"/>${rings}`;
+    return `<path d="M${[...left, ...right].map(pt).join('L')}Z"/>${caps}`;
   };
   const solid = solidUpTo(1);
   const top = Math.min(...rings.map((p) => p.y - p.r * flat));
