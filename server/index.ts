@@ -14,7 +14,7 @@ async function main() {
   const logger = createLogger(config.logLevel);
   const db = openDatabase(config.dbFile);
   await migrateToLatest(db);
-  const seeded = await seedDemoIfEmpty(db);
+  const seeded = await seedDemoIfEmpty(db, { filesDir: config.filesDir });
 
   const context = createContext({
     db,

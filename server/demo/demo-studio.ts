@@ -34,7 +34,9 @@ export const demoVenues = [
     postcode: 'IP15 5AB',
     contactName: 'Priya Ondaatje',
     email: 'priya@lanthorn.example',
-    vatNumber: null,
+    // Invented, with valid GB check digits (modulus 97, "9755" variant), written as the venue
+    // form stores it: no spaces, capitals.
+    vatNumber: 'GB285019495',
     terms: {
       ...gbp,
       commissionRateBp: 4000,

@@ -6,15 +6,15 @@ import { clearAllData, seedDemoIfEmpty } from './seed';
 /** `npm run seed` seeds an empty database; `npm run seed -- --reset` empties it first. */
 async function main() {
   const reset = process.argv.includes('--reset');
-  const { dbFile } = readConfig();
+  const { dbFile, filesDir } = readConfig();
   const db = openDatabase(dbFile);
   try {
     await migrateToLatest(db);
     if (reset) await clearAllData(db);
-    const seeded = await seedDemoIfEmpty(db);
+    const seeded = await seedDemoIfEmpty(db, { filesDir });
     console.log(
       seeded
-        ? `Demo data seeded into ${dbFile}.`
+        ? `Demo data seeded into ${dbFile}, its photographs into ${filesDir}.`
         : `${dbFile} already holds data; nothing seeded. Use --reset to replace it with the demo.`,
     );
   } finally {

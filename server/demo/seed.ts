@@ -3,9 +3,12 @@ import { sql } from 'kysely';
 import { insuranceValue } from '@/shared/money';
 import { type Terms } from '@/shared/schemas/terms';
 
+import { type Scope } from '../access/viewer';
 import { createUserWithPassword } from '../auth/passwords';
 import { type Db } from '../db/database';
 import { type Database } from '../db/schema';
+import { appendPhotos, fileIdFor } from '../photos/photos.repository';
+import { type DemoPhoto, storeDemoPhotos } from './demo-photos';
 import { demoConsignments, demoSignIns, demoStudio, demoVenues, demoWorks } from './demo-studio';
 
 /** Children before parents, so deleting in this order never trips a foreign key. */
@@ -45,14 +48,22 @@ export async function clearAllData(db: Db): Promise<void> {
   });
 }
 
+export type SeedOptions = {
+  /** Where photographs are stored: the same folder the app serves uploads from. */
+  filesDir: string;
+};
+
 /** Seeds the demo scenario, but only into an empty database. Returns whether it did. */
-export async function seedDemoIfEmpty(db: Db): Promise<boolean> {
+export async function seedDemoIfEmpty(db: Db, options: SeedOptions): Promise<boolean> {
   if (!(await isEmpty(db))) return false;
-  await seedDemo(db);
+  // The photographs go to disk first; a file left there by a failed seed is harmless, being
+  // named by its content, and the next seed finds it in place.
+  const photos = await storeDemoPhotos(options.filesDir);
+  await seedDemo(db, photos);
   return true;
 }
 
-async function seedDemo(db: Db): Promise<void> {
+async function seedDemo(db: Db, photos: DemoPhoto[][]): Promise<void> {
   const [makerPerson, assistantPerson, galleryPerson] = demoSignIns.people;
   const password = demoSignIns.password;
   // One transaction: a seed that fails halfway leaves the database empty, so it can run again.
@@ -109,6 +120,7 @@ async function seedDemo(db: Db): Promise<void> {
       ])
       .execute();
 
+    const scope: Scope = { studioId, venueId: null, userId: maker, role: 'owner' };
     const workIds: number[] = [];
     for (const [i, w] of demoWorks.entries()) {
       const { id } = await trx
@@ -138,6 +150,11 @@ async function seedDemo(db: Db): Promise<void> {
         .returning('id')
         .executeTakeFirstOrThrow();
       workIds.push(id);
+      const fileIds: number[] = [];
+      for (const photo of photos[i]!) {
+        fileIds.push(await fileIdFor(trx, scope, photo.image, photo.name));
+      }
+      await appendPhotos(trx, scope, id, fileIds);
     }
 
     for (const c of demoConsignments) {
