@@ -5,6 +5,7 @@
 // Targets on the emulated connection: at most 450 KB and 3.5 s.
 //   npm run bench:load                 build, then measure
 //   npm run bench:load -- --no-build   measure the dist/ already built
+//   npm run bench:load -- --list       also list what the first load fetched
 import { execSync } from 'node:child_process';
 
 import { type Browser } from 'playwright-core';
@@ -24,7 +25,8 @@ const fast3g = {
   uploadThroughput: (750 * 1000) / 8,
 };
 
-type Sample = { bytes: number; usableMs: number; requests: number };
+type Fetched = { url: string; bytes: number };
+type Sample = { bytes: number; usableMs: number; requests: number; fetched: Fetched[] };
 
 async function loadSignIn(browser: Browser, url: string, throttle: boolean): Promise<Sample> {
   const context = await browser.newContext({ viewport: viewports.phone });
@@ -40,11 +42,11 @@ async function loadSignIn(browser: Browser, url: string, throttle: boolean): Pro
   await cdp.send('Network.setCacheDisabled', { cacheDisabled: true });
   if (throttle) await cdp.send('Network.emulateNetworkConditions', fast3g);
 
-  let bytes = 0;
-  let requests = 0;
+  const urls = new Map<string, string>();
+  const fetched: Fetched[] = [];
+  cdp.on('Network.requestWillBeSent', (e) => urls.set(e.requestId, e.request.url));
   cdp.on('Network.loadingFinished', (e) => {
-    bytes += e.encodedDataLength;
-    requests += 1;
+    fetched.push({ url: urls.get(e.requestId) ?? '?', bytes: e.encodedDataLength });
   });
 
   await page.goto(`${url}/sign-in`, { waitUntil: 'commit' });
@@ -67,7 +69,8 @@ async function loadSignIn(browser: Browser, url: string, throttle: boolean): Pro
   await page.waitForLoadState('networkidle');
   await context.close();
   if (problems.length > 0) throw new Error(`The page logged errors:\n${problems.join('\n')}`);
-  return { bytes, usableMs, requests };
+  const bytes = fetched.reduce((sum, f) => sum + f.bytes, 0);
+  return { bytes, usableMs, requests: fetched.length, fetched };
 }
 
 function median(values: number[]): number {
@@ -82,6 +85,11 @@ const sec = (ms: number) => `${(ms / 1000).toFixed(2)} s`;
 async function measure(browser: Browser, url: string, throttle: boolean) {
   const samples: Sample[] = [];
   for (let i = 0; i < RUNS; i++) samples.push(await loadSignIn(browser, url, throttle));
+  if (throttle && process.argv.includes('--list')) {
+    for (const f of samples[0]!.fetched) {
+      console.log(`  ${kb(f.bytes).padStart(9)}  ${new URL(f.url).pathname}`);
+    }
+  }
   const result = {
     bytes: median(samples.map((s) => s.bytes)),
     usableMs: median(samples.map((s) => s.usableMs)),
