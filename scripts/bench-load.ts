@@ -42,11 +42,21 @@ async function loadSignIn(browser: Browser, url: string, throttle: boolean): Pro
   await cdp.send('Network.setCacheDisabled', { cacheDisabled: true });
   if (throttle) await cdp.send('Network.emulateNetworkConditions', fast3g);
 
-  const urls = new Map<string, string>();
+  const inFlight = new Map<string, string>();
   const fetched: Fetched[] = [];
-  cdp.on('Network.requestWillBeSent', (e) => urls.set(e.requestId, e.request.url));
+  let lastActivity = Date.now();
+  cdp.on('Network.requestWillBeSent', (e) => {
+    inFlight.set(e.requestId, e.request.url);
+    lastActivity = Date.now();
+  });
   cdp.on('Network.loadingFinished', (e) => {
-    fetched.push({ url: urls.get(e.requestId) ?? '?', bytes: e.encodedDataLength });
+    fetched.push({ url: inFlight.get(e.requestId) ?? '?', bytes: e.encodedDataLength });
+    inFlight.delete(e.requestId);
+    lastActivity = Date.now();
+  });
+  cdp.on('Network.loadingFailed', (e) => {
+    inFlight.delete(e.requestId);
+    lastActivity = Date.now();
   });
 
   await page.goto(`${url}/sign-in`, { waitUntil: 'commit' });
@@ -58,15 +68,23 @@ async function loadSignIn(browser: Browser, url: string, throttle: boolean): Pro
       const box = input.getBoundingClientRect();
       if (box.width === 0 || box.height === 0) return false;
       if (getComputedStyle(input).visibility === 'hidden') return false;
-      if (document.fonts.status !== 'loaded') return false;
+      // The app's font faces are declared and none is still on its way.
+      let loaded = 0;
+      document.fonts.forEach((face) => {
+        if (face.status === 'loaded') loaded += 1;
+      });
+      if (loaded === 0 || document.fonts.status !== 'loaded') return false;
       return performance.now();
     },
     undefined,
     { polling: 'raf', timeout: 120_000 },
   );
   const usableMs = (await usable.jsonValue()) as number;
-  // Whatever the page still fetches after the form is ready counts as part of the load.
-  await page.waitForLoadState('networkidle');
+  // Whatever the page still fetches after the form is ready counts as part of the load: wait until
+  // nothing has been in flight for a second.
+  while (inFlight.size > 0 || Date.now() - lastActivity < 1000) {
+    await new Promise((r) => setTimeout(r, 100));
+  }
   await context.close();
   if (problems.length > 0) throw new Error(`The page logged errors:\n${problems.join('\n')}`);
   const bytes = fetched.reduce((sum, f) => sum + f.bytes, 0);
