@@ -1,12 +1,15 @@
-// Adds preload hints to the exported index.html for what the first page needs but the browser
-// would only discover after the main bundle has run: the web fonts (the root layout waits for
-// them), Expo Router's layout chunks, and the sign-in route's chunk. They then download alongside
-// the bundle instead of one after another once it has run.
+// Makes the exported index.html ask up front for what the first page needs but the browser would
+// only discover once the main bundle has run:
+// - the web fonts, as preload hints (the root layout waits for them);
+// - Expo Router's layout chunks and the sign-in route's chunk, as deferred scripts before the
+//   entry bundle. A chunk that has already run when the router asks for it is used at once (Expo's
+//   async require tries a synchronous import first on the web); one fetched on demand makes the
+//   route suspend, and React then holds the page back for up to 300 ms before it shows it.
 //   tsx scripts/web-preload.ts [dist]
 import fs from 'node:fs';
 import path from 'node:path';
 
-const marker = '<!-- preload: scripts/web-preload.ts -->';
+const marker = '<!-- first-load hints: scripts/web-preload.ts -->';
 
 /**
  * Route chunks worth fetching on every first load. A phone that has never signed in lands on
@@ -25,27 +28,34 @@ function* filesUnder(dir: string): Generator<string> {
 function main() {
   const root = path.resolve(process.argv[2] ?? 'dist');
   const indexFile = path.join(root, 'index.html');
-  const html = fs.readFileSync(indexFile, 'utf8');
+  let html = fs.readFileSync(indexFile, 'utf8');
   if (html.includes(marker)) return;
 
   const url = (file: string) => `/${path.relative(root, file).split(path.sep).join('/')}`;
-  const files = [...filesUnder(root)].sort();
+  const urls = [...filesUnder(root)].map(url).sort();
+
   // Font requests are CORS requests, so their preloads need `crossorigin` to be used.
-  const fonts = files
-    .filter((f) => f.endsWith('.woff2'))
-    .map((f) => `<link rel="preload" href="${url(f)}" as="font" type="font/woff2" crossorigin>`);
+  const fonts = urls
+    .filter((u) => u.endsWith('.woff2'))
+    .map((u) => `<link rel="preload" href="${u}" as="font" type="font/woff2" crossorigin>`);
+  if (!html.includes('</head>')) throw new Error(`${indexFile} has no </head>`);
+  html = html.replace('</head>', `${[marker, ...fonts].join('\n')}\n</head>`);
+
   // Expo Router loads every layout before it renders a route; chunks are named after their file.
   const chunk = new RegExp(
-    `/_expo/static/js/web/(_layout|${landingRoutes.join('|')})-[0-9a-f]+\\.js$`,
+    `^/_expo/static/js/web/(_layout|${landingRoutes.join('|')})-[0-9a-f]+\\.js$`,
   );
-  const scripts = files
-    .filter((f) => chunk.test(url(f)))
-    .map((f) => `<link rel="preload" href="${url(f)}" as="script">`);
-  if (!html.includes('</head>')) throw new Error(`${indexFile} has no </head>`);
+  const scripts = urls
+    .filter((u) => chunk.test(u))
+    .map((u) => `<script src="${u}" defer></script>`);
+  const entry = /<script src="\/_expo\/static\/js\/web\/entry-[0-9a-f]+\.js" defer><\/script>/;
+  if (!entry.test(html)) throw new Error(`${indexFile} has no entry bundle script`);
+  html = html.replace(entry, (tag) => `${scripts.join('')}${tag}`);
 
-  const hints = [marker, ...fonts, ...scripts].join('\n');
-  fs.writeFileSync(indexFile, html.replace('</head>', `${hints}\n</head>`));
-  console.log(`Preload hints: ${fonts.length} fonts, ${scripts.length} script chunks.`);
+  fs.writeFileSync(indexFile, html);
+  console.log(
+    `First-load hints: ${fonts.length} fonts preloaded, ${scripts.length} chunks as scripts.`,
+  );
 }
 
 main();
