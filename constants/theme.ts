@@ -1,8 +1,6 @@
-import { AtkinsonHyperlegibleNext_400Regular } from '@expo-google-fonts/atkinson-hyperlegible-next/400Regular';
-import { AtkinsonHyperlegibleNext_600SemiBold } from '@expo-google-fonts/atkinson-hyperlegible-next/600SemiBold';
-import { Literata_500Medium } from '@expo-google-fonts/literata/500Medium';
-import { Literata_600SemiBold } from '@expo-google-fonts/literata/600SemiBold';
 import { type TextStyle } from 'react-native';
+
+import { fontFiles } from './font-files';
 
 /**
  * Saggar's look: warm paper, ink, and one accent from a celadon glaze.
@@ -49,12 +47,7 @@ export type StateTone = keyof typeof stateTones;
  * a working `tnum` feature (its GSUB table maps all ten proportional digits to 632-unit tabular
  * ones), so it serves for figures as well as text.
  */
-export const fontAssets = {
-  Literata_500Medium,
-  Literata_600SemiBold,
-  AtkinsonHyperlegibleNext_400Regular,
-  AtkinsonHyperlegibleNext_600SemiBold,
-};
+export const fontAssets = fontFiles;
 
 export const fonts = {
   heading: 'Literata_600SemiBold',

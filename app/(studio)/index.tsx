@@ -1,4 +1,4 @@
-import { OverviewScreen } from '@/components/screens/overview/overview-screen';
+import { OverviewScreen } from '@/components/screens/studio/lazy-studio-screens';
 import { PageTitle } from '@/components/ui/page-title';
 
 export default function OverviewRoute() {

@@ -1,4 +1,4 @@
-import { SettingsScreen } from '@/components/screens/settings/settings-screen';
+import { SettingsScreen } from '@/components/screens/studio/lazy-studio-screens';
 import { PageTitle } from '@/components/ui/page-title';
 
 export default function SettingsRoute() {

@@ -1,15 +1,4 @@
-import fs from 'node:fs';
-import os from 'node:os';
-import path from 'node:path';
-
-import pino from 'pino';
 import request from 'supertest';
-
-import { createApp } from '@/server/app';
-import { createContext } from '@/server/context';
-import { openDatabase } from '@/server/db/database';
-import { migrateToLatest } from '@/server/db/migrate';
-import { webApp } from '@/server/http/web-app';
 
 import { addPerson, addStudio, createTestApp, signIn } from './helpers/test-app';
 
@@ -164,33 +153,5 @@ describe('request bodies', () => {
     expect(res.body).toEqual({
       error: { code: 'internal', message: 'Something went wrong on our side. Try again.' },
     });
-  });
-});
-
-describe('the web app', () => {
-  it('serves index.html for deep links and assets as files, but not for /api', async () => {
-    const root = fs.mkdtempSync(path.join(os.tmpdir(), 'saggar-web-'));
-    fs.writeFileSync(path.join(root, 'index.html'), '<!doctype html><title>Saggar</title>');
-    fs.writeFileSync(path.join(root, 'app.js'), 'console.log(1)');
-    const db = openDatabase(':memory:');
-    await migrateToLatest(db);
-    const app = createApp(
-      createContext({
-        db,
-        logger: pino({ level: 'silent' }),
-        secret: 'test-secret-that-is-long-enough-for-better-auth',
-        web: webApp(root),
-        trustedOrigins: [],
-        filesDir: path.join(root, 'files'),
-      }),
-    );
-    const deep = await request(app).get('/works/12');
-    expect(deep.status).toBe(200);
-    expect(deep.text).toContain('<title>Saggar</title>');
-    const asset = await request(app).get('/app.js');
-    expect(asset.text).toBe('console.log(1)');
-    const api = await request(app).get('/api/no-such-resource/12');
-    expect(api.status).toBe(404);
-    expect(api.body.error.code).toBe('not_found');
   });
 });

@@ -1,4 +1,4 @@
-import { VenuesScreen } from '@/components/screens/venues/venues-screen';
+import { VenuesScreen } from '@/components/screens/studio/lazy-studio-screens';
 import { PageTitle } from '@/components/ui/page-title';
 
 export default function VenuesRoute() {

@@ -1,4 +1,4 @@
-import { VenueCreateScreen } from '@/components/screens/venue-form/venue-create-screen';
+import { VenueCreateScreen } from '@/components/screens/studio/lazy-studio-screens';
 import { PageTitle } from '@/components/ui/page-title';
 
 export default function NewVenueRoute() {

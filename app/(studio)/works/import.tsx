@@ -1,4 +1,4 @@
-import { WorkImportScreen } from '@/components/screens/work-import/work-import-screen';
+import { WorkImportScreen } from '@/components/screens/studio/lazy-studio-screens';
 import { PageTitle } from '@/components/ui/page-title';
 
 export default function ImportWorksRoute() {

@@ -1,4 +1,4 @@
-import { WorksScreen } from '@/components/screens/works/works-screen';
+import { WorksScreen } from '@/components/screens/studio/lazy-studio-screens';
 import { PageTitle } from '@/components/ui/page-title';
 
 export default function WorksRoute() {

@@ -1,4 +1,4 @@
-import { WorkCreateScreen } from '@/components/screens/work-form/work-create-screen';
+import { WorkCreateScreen } from '@/components/screens/studio/lazy-studio-screens';
 import { PageTitle } from '@/components/ui/page-title';
 
 export default function NewWorkRoute() {

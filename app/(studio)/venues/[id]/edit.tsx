@@ -1,7 +1,7 @@
 import { useLocalSearchParams } from 'expo-router';
 
 import { NotFoundScreen } from '@/components/screens/not-found/not-found-screen';
-import { VenueEditScreen } from '@/components/screens/venue-form/venue-edit-screen';
+import { VenueEditScreen } from '@/components/screens/studio/lazy-studio-screens';
 import { PageTitle } from '@/components/ui/page-title';
 
 export default function EditVenueRoute() {

@@ -1,7 +1,7 @@
 import { useLocalSearchParams } from 'expo-router';
 
 import { NotFoundScreen } from '@/components/screens/not-found/not-found-screen';
-import { WorkScreen } from '@/components/screens/work/work-screen';
+import { WorkScreen } from '@/components/screens/studio/lazy-studio-screens';
 import { PageTitle } from '@/components/ui/page-title';
 
 export default function WorkRoute() {

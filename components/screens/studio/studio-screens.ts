@@ -1,0 +1,13 @@
+// Every screen of the studio side. Imported only through `lazy-studio-screens.tsx`, so that they
+// and everything only they use (forms, tables, photos, money rules) load together as one chunk.
+export { OverviewScreen } from '../overview/overview-screen';
+export { SettingsScreen } from '../settings/settings-screen';
+export { VenueScreen } from '../venue/venue-screen';
+export { VenueCreateScreen } from '../venue-form/venue-create-screen';
+export { VenueEditScreen } from '../venue-form/venue-edit-screen';
+export { VenuesScreen } from '../venues/venues-screen';
+export { WorkScreen } from '../work/work-screen';
+export { WorkCreateScreen } from '../work-form/work-create-screen';
+export { WorkEditScreen } from '../work-form/work-edit-screen';
+export { WorkImportScreen } from '../work-import/work-import-screen';
+export { WorksScreen } from '../works/works-screen';

@@ -1,0 +1,12 @@
+import { AtkinsonHyperlegibleNext_400Regular } from '@expo-google-fonts/atkinson-hyperlegible-next/400Regular';
+import { AtkinsonHyperlegibleNext_600SemiBold } from '@expo-google-fonts/atkinson-hyperlegible-next/600SemiBold';
+import { Literata_500Medium } from '@expo-google-fonts/literata/500Medium';
+import { Literata_600SemiBold } from '@expo-google-fonts/literata/600SemiBold';
+
+/** The packaged .ttf files, for native builds; the web loads WOFF2 subsets (font-files.web.ts). */
+export const fontFiles = {
+  Literata_500Medium,
+  Literata_600SemiBold,
+  AtkinsonHyperlegibleNext_400Regular,
+  AtkinsonHyperlegibleNext_600SemiBold,
+};
