@@ -5,7 +5,7 @@ import { type ServerProcess } from './server-process';
 const CLIENTS = 3;
 const PHOTOS_EACH = 10;
 /** The bound the README states for the server's resident memory while photos are checked. */
-export const UPLOAD_MEMORY_BOUND_MB = 700;
+export const UPLOAD_MEMORY_BOUND_MB = 512;
 
 /** A camera-sized photograph stand-in: 24 megapixels of grain, as a JPEG of a few MB. */
 function largePhoto(seed: number): Promise<Buffer> {

@@ -1,13 +1,11 @@
+import { type CompiledQuery } from 'kysely';
+
 import { type Membership } from '@/shared/schemas/membership';
 
 import { type Db } from '../db/database';
 
-/**
- * A live session by its token, with its person and every membership, in one query: what each
- * request needs to know who is asking. An expired or signed-out session answers undefined.
- */
-export async function findLiveSession(db: Db, token: string, now: Date) {
-  const rows = await db
+function liveSessionQuery(db: Db, token: string, nowIso: string) {
+  return db
     .selectFrom('sessions')
     .innerJoin('users', 'users.id', 'sessions.user_id')
     .leftJoin('memberships', 'memberships.user_id', 'users.id')
@@ -32,10 +30,36 @@ export async function findLiveSession(db: Db, token: string, now: Date) {
       'venues.name as venue_name',
     ])
     .where('sessions.token', '=', token)
-    .where('sessions.expires_at', '>', now.toISOString())
+    .where('sessions.expires_at', '>', nowIso)
     .orderBy('studios.name')
-    .orderBy('memberships.id')
-    .execute();
+    .orderBy('memberships.id');
+}
+
+type LiveSessionRow = Awaited<ReturnType<ReturnType<typeof liveSessionQuery>['execute']>>[number];
+
+/**
+ * The session query is built and compiled once per database and run with each request's token:
+ * every API request asks it, and building it anew cost more than running it.
+ */
+const compiledSessionQueries = new WeakMap<Db, CompiledQuery<LiveSessionRow>>();
+const tokenSlot = '\u0000token';
+const nowSlot = '\u0000now';
+
+/**
+ * A live session by its token, with its person and every membership, in one query: what each
+ * request needs to know who is asking. An expired or signed-out session answers undefined.
+ */
+export async function findLiveSession(db: Db, token: string, now: Date) {
+  let compiled = compiledSessionQueries.get(db);
+  if (!compiled) {
+    compiled = liveSessionQuery(db, tokenSlot, nowSlot).compile();
+    compiledSessionQueries.set(db, compiled);
+  }
+  const nowIso = now.toISOString();
+  const parameters = compiled.parameters.map((p) =>
+    p === tokenSlot ? token : p === nowSlot ? nowIso : p,
+  );
+  const { rows } = await db.executeQuery<LiveSessionRow>({ ...compiled, parameters });
   const first = rows[0];
   if (!first) return undefined;
   const memberships: Membership[] = [];
