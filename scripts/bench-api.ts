@@ -7,10 +7,10 @@ import path from 'node:path';
 
 import { benchPauses } from './bench/pauses';
 import { benchOwner } from './bench/seed-works';
-import { signInCookie, startServerProcess } from './bench/server-process';
 import { benchThroughput } from './bench/throughput';
 import { benchUploads } from './bench/uploads';
 import { benchWorksPage } from './bench/works-page';
+import { signInCookie, startServerProcess } from './lib/server-process';
 
 async function main() {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'saggar-bench-'));
@@ -18,7 +18,10 @@ async function main() {
   console.log('Seeding 10,000 works…');
   const results = [await benchWorksPage(dbFile)];
 
-  const server = await startServerProcess(dbFile, { SAGGAR_FILES_DIR: path.join(dir, 'files') });
+  const server = await startServerProcess(dbFile, {
+    SAGGAR_FILES_DIR: path.join(dir, 'files'),
+    SAGGAR_WEB_ROOT: path.join(dir, 'no-web-app'),
+  });
   try {
     const cookie = await signInCookie(server.url, benchOwner.email, benchOwner.password);
     // Pauses first: the throughput run leaves slow pages queued behind it for a moment.

@@ -5,6 +5,8 @@ import fs from 'node:fs';
 import path from 'node:path';
 import zlib from 'node:zlib';
 
+import { filesUnder } from './lib/files';
+
 /** Text and other formats that compress well; images and WOFF2 fonts are compressed already. */
 const compressible = new Set([
   '.html',
@@ -25,14 +27,6 @@ const compressible = new Set([
 
 /** A copy must save at least this share of the original to be worth a second file. */
 const minSaving = 0.05;
-
-function* filesUnder(dir: string): Generator<string> {
-  for (const entry of fs.readdirSync(dir, { withFileTypes: true })) {
-    const full = path.join(dir, entry.name);
-    if (entry.isDirectory()) yield* filesUnder(full);
-    else if (entry.isFile()) yield full;
-  }
-}
 
 function main() {
   const root = path.resolve(process.argv[2] ?? 'dist');

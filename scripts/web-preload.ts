@@ -9,6 +9,8 @@
 import fs from 'node:fs';
 import path from 'node:path';
 
+import { filesUnder } from './lib/files';
+
 const marker = '<!-- first-load hints: scripts/web-preload.ts -->';
 
 /**
@@ -16,14 +18,6 @@ const marker = '<!-- first-load hints: scripts/web-preload.ts -->';
  * /sign-in whatever address it opened (the other routes redirect there), and its chunk is small.
  */
 const landingRoutes = ['sign-in'];
-
-function* filesUnder(dir: string): Generator<string> {
-  for (const entry of fs.readdirSync(dir, { withFileTypes: true })) {
-    const full = path.join(dir, entry.name);
-    if (entry.isDirectory()) yield* filesUnder(full);
-    else if (entry.isFile()) yield full;
-  }
-}
 
 function main() {
   const root = path.resolve(process.argv[2] ?? 'dist');

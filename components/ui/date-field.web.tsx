@@ -1,10 +1,11 @@
 import { useId } from 'react';
 import { StyleSheet, View } from 'react-native';
 
-import { fonts, palette, radii, spacing, touchTarget } from '@/constants/theme';
+import { fonts, palette, spacing } from '@/constants/theme';
 
 import { type DateFieldProps } from './date-field.types';
 import { Text } from './text';
+import { webControlStyle } from './web-control-style';
 
 export type { DateFieldProps } from './date-field.types';
 
@@ -29,7 +30,11 @@ export function DateField({ label, value, onChange, onBlur, testID, hint, error 
         value={value}
         onChange={(event) => onChange(event.target.value)}
         onBlur={onBlur}
-        style={{ ...inputStyle, ...(invalid ? invalidStyle : null) }}
+        style={{
+          ...webControlStyle,
+          fontVariantNumeric: 'tabular-nums',
+          ...(invalid ? invalidStyle : null),
+        }}
       />
       {invalid ? (
         <Text nativeID={`${id}-error`} testID={`${testID}-error`} role="alert" style={styles.error}>
@@ -39,23 +44,6 @@ export function DateField({ label, value, onChange, onBlur, testID, hint, error 
     </View>
   );
 }
-
-const inputStyle = {
-  minHeight: touchTarget + 4,
-  paddingLeft: spacing.md,
-  paddingRight: spacing.md,
-  borderWidth: 1,
-  borderStyle: 'solid',
-  borderColor: palette.outline,
-  borderRadius: radii.md,
-  backgroundColor: palette.surface,
-  color: palette.ink,
-  fontFamily: fonts.body,
-  fontSize: 17,
-  fontVariantNumeric: 'tabular-nums',
-  boxSizing: 'border-box',
-  width: '100%',
-} as const;
 
 const invalidStyle = { borderColor: palette.danger, borderWidth: 2 } as const;
 

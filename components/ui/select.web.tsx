@@ -1,10 +1,11 @@
 import { useId } from 'react';
 import { StyleSheet, View } from 'react-native';
 
-import { fonts, palette, radii, spacing, touchTarget } from '@/constants/theme';
+import { spacing } from '@/constants/theme';
 
 import { type SelectProps } from './select.types';
 import { Text } from './text';
+import { webControlStyle } from './web-control-style';
 
 export type { SelectOption, SelectProps } from './select.types';
 
@@ -23,7 +24,7 @@ export function Select({ label, options, value, onChange, testID, emptyLabel }: 
         data-testid={testID}
         value={value}
         onChange={(event) => onChange(event.target.value)}
-        style={selectStyle}
+        style={webControlStyle}
       >
         {emptyLabel ? <option value="">{emptyLabel}</option> : null}
         {options.map((option) => (
@@ -35,21 +36,6 @@ export function Select({ label, options, value, onChange, testID, emptyLabel }: 
     </View>
   );
 }
-
-const selectStyle = {
-  minHeight: touchTarget + 4,
-  paddingLeft: spacing.md,
-  paddingRight: spacing.md,
-  borderWidth: 1,
-  borderStyle: 'solid',
-  borderColor: palette.outline,
-  borderRadius: radii.md,
-  backgroundColor: palette.surface,
-  color: palette.ink,
-  fontFamily: fonts.body,
-  fontSize: 17,
-  width: '100%',
-} as const;
 
 const styles = StyleSheet.create({
   field: { gap: spacing.xs },

@@ -1,5 +1,5 @@
 import { maxImportRows } from '../../shared/schemas/work-import';
-import { type ServerProcess } from './server-process';
+import { type ServerProcess } from '../lib/server-process';
 import { ms } from './stats';
 
 const TARGET_MS = 250;

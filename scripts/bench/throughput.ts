@@ -1,6 +1,6 @@
 import autocannon from 'autocannon';
 
-import { type ServerProcess } from './server-process';
+import { type ServerProcess } from '../lib/server-process';
 
 const CONNECTIONS = 50;
 const SECONDS = 8;

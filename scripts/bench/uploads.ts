@@ -1,6 +1,6 @@
 import sharp from 'sharp';
 
-import { type ServerProcess } from './server-process';
+import { type ServerProcess } from '../lib/server-process';
 
 const CLIENTS = 3;
 const PHOTOS_EACH = 10;

@@ -10,8 +10,8 @@ import { createApp } from '../../server/app';
 import { createContext } from '../../server/context';
 import { migrateToLatest } from '../../server/db/migrate';
 import { type Database } from '../../server/db/schema';
+import { signInCookie } from '../lib/server-process';
 import { benchOwner, seedWorks } from './seed-works';
-import { signInCookie } from './server-process';
 import { ms, stats } from './stats';
 
 export const WORKS_QUERY =

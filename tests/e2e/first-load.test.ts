@@ -1,23 +1,12 @@
-import { type Browser, type Page, type Response } from 'playwright-core';
+import { type Page, type Response } from 'playwright-core';
 
 import { demoSignIns } from '@/server/demo/demo-studio';
 
-import { launchBrowser, newPage, problemsOf } from './helpers/browser';
-import { type RunningServer, startServer } from './helpers/server';
+import { newPage, problemsOf } from './helpers/browser';
+import { withServerAndBrowser } from './helpers/setup';
 import { signInToStudio } from './helpers/studio';
 
-let server: RunningServer;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await startServer();
-  browser = await launchBrowser();
-});
-
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
+const env = withServerAndBrowser();
 
 /** Every response the page receives from now on. */
 function recordResponses(page: Page): Response[] {
@@ -31,9 +20,9 @@ const isScript = (r: Response) => pathOf(r).startsWith('/_expo/static/js/');
 
 describe('the first load', () => {
   it('of /sign-in fetches brotli scripts and WOFF2 fonts, and none of the studio screens', async () => {
-    const page = await newPage(browser, 'phone');
+    const page = await newPage(env.browser, 'phone');
     const responses = recordResponses(page);
-    await page.goto(`${server.url}/sign-in`);
+    await page.goto(`${env.server.url}/sign-in`);
     await page.getByTestId('sign-in-email').waitFor();
     await page.waitForLoadState('networkidle');
 
@@ -80,10 +69,10 @@ describe('the first load', () => {
   });
 
   it('of a deep link into the studio loads the studio screens and shows the page', async () => {
-    const page = await newPage(browser, 'phone');
-    await signInToStudio(page, server.url);
-    const works = await (await page.request.get(`${server.url}/api/works?pageSize=1`)).json();
-    const venues = await (await page.request.get(`${server.url}/api/venues`)).json();
+    const page = await newPage(env.browser, 'phone');
+    await signInToStudio(page, env.server.url);
+    const works = await (await page.request.get(`${env.server.url}/api/works?pageSize=1`)).json();
+    const venues = await (await page.request.get(`${env.server.url}/api/venues`)).json();
 
     for (const [url, screen] of [
       [`/works/${works.items[0].id}`, 'work-screen'],
@@ -91,7 +80,7 @@ describe('the first load', () => {
       ['/works', 'works-screen'],
     ] as const) {
       const responses = recordResponses(page);
-      await page.goto(`${server.url}${url}`);
+      await page.goto(`${env.server.url}${url}`);
       await page.getByTestId(screen).waitFor();
       expect(responses.filter(isScript).map(pathOf)).toContainEqual(
         expect.stringContaining('studio-screens'),
@@ -102,14 +91,14 @@ describe('the first load', () => {
   });
 
   it('of a deep link for gallery staff never fetches the studio screens', async () => {
-    const page = await newPage(browser, 'phone');
+    const page = await newPage(env.browser, 'phone');
     const responses = recordResponses(page);
-    await page.goto(`${server.url}/sign-in`);
+    await page.goto(`${env.server.url}/sign-in`);
     await page.getByTestId('sign-in-email').fill(demoSignIns.people[2].email);
     await page.getByTestId('sign-in-password').fill(demoSignIns.password);
     await page.getByTestId('sign-in-submit').click();
     await page.getByTestId('venue-home-screen').waitFor();
-    await page.goto(`${server.url}/venue`);
+    await page.goto(`${env.server.url}/venue`);
     await page.getByTestId('venue-home-screen').waitFor();
     expect(responses.filter(isScript).map(pathOf)).not.toContainEqual(
       expect.stringContaining('studio-screens'),

@@ -1,40 +1,21 @@
-import { type Browser } from 'playwright-core';
-
 import { importFieldLabels } from '@/shared/schemas/work-import';
 
-import {
-  expectAccessible,
-  launchBrowser,
-  newPage,
-  problemsOf,
-  screenshot,
-} from './helpers/browser';
-import { type RunningServer, startServer } from './helpers/server';
+import { expectAccessible, newPage, problemsOf, screenshot } from './helpers/browser';
+import { withServerAndBrowser } from './helpers/setup';
 import { makeImage, signInToStudio } from './helpers/studio';
 
-let server: RunningServer;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await startServer();
-  browser = await launchBrowser();
-});
-
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
+const env = withServerAndBrowser();
 
 describe('works at phone size', () => {
   it('creates a work with two photos and finds it in the list by search', async () => {
-    const page = await newPage(browser, 'phone');
-    await signInToStudio(page, server.url);
+    const page = await newPage(env.browser, 'phone');
+    await signInToStudio(page, env.server.url);
     await page.getByTestId('nav-works').click();
     await page.getByTestId('works-screen').waitFor();
     await page.getByTestId('works-new').click();
     await page.getByTestId('work-create-screen').waitFor();
 
-    const studio = await (await page.request.get(`${server.url}/api/studio`)).json();
+    const studio = await (await page.request.get(`${env.server.url}/api/studio`)).json();
     expect(await page.getByTestId('work-stockNumber').inputValue()).toBe(studio.nextStockNumber);
 
     await page.getByTestId('work-title').fill('Salt-glazed cider jar, two handles');
@@ -71,7 +52,7 @@ describe('works at phone size', () => {
     await page.getByTestId('work-screen').waitFor();
     await page.getByTestId('work-cover').waitFor();
     const id = Number(new URL(page.url()).pathname.split('/').at(-1));
-    const work = await (await page.request.get(`${server.url}/api/works/${id}`)).json();
+    const work = await (await page.request.get(`${env.server.url}/api/works/${id}`)).json();
     expect(work.stockNumber).toBe(studio.nextStockNumber);
     expect(work.retailPrice).toEqual({ amount: 124550, currency: 'GBP' });
     expect(work.photos).toHaveLength(2);
@@ -101,12 +82,13 @@ describe('works at phone size', () => {
   });
 
   it('previews a CSV of 50 works with three bad rows, then imports the other 47', async () => {
-    const page = await newPage(browser, 'phone');
-    await signInToStudio(page, server.url);
-    const before = (await (await page.request.get(`${server.url}/api/works?pageSize=1`)).json())
+    const page = await newPage(env.browser, 'phone');
+    await signInToStudio(page, env.server.url);
+    const before = (await (await page.request.get(`${env.server.url}/api/works?pageSize=1`)).json())
       .total;
-    const existing = (await (await page.request.get(`${server.url}/api/works?pageSize=1`)).json())
-      .items[0].stockNumber;
+    const existing = (
+      await (await page.request.get(`${env.server.url}/api/works?pageSize=1`)).json()
+    ).items[0].stockNumber;
 
     const header = [
       'stockNumber',
@@ -130,7 +112,7 @@ describe('works at phone size', () => {
     }
     const csv = `${lines.join('\n')}\n`;
 
-    await page.goto(`${server.url}/works/import`);
+    await page.goto(`${env.server.url}/works/import`);
     await page.getByTestId('work-import-screen').waitFor();
     await expectAccessible(page);
     const [chooser] = await Promise.all([
@@ -156,7 +138,7 @@ describe('works at phone size', () => {
     await expect(page.getByTestId('import-done').innerText()).resolves.toContain(
       '47 works imported',
     );
-    const after = (await (await page.request.get(`${server.url}/api/works?pageSize=1`)).json())
+    const after = (await (await page.request.get(`${env.server.url}/api/works?pageSize=1`)).json())
       .total;
     expect(after - before).toBe(47);
     await screenshot(page, 'work-import-done-phone');
@@ -166,8 +148,8 @@ describe('works at phone size', () => {
   });
 
   it('creates a venue, the net preview following the commission', async () => {
-    const page = await newPage(browser, 'phone');
-    await signInToStudio(page, server.url);
+    const page = await newPage(env.browser, 'phone');
+    await signInToStudio(page, env.server.url);
     await page.getByTestId('nav-venues').click();
     await page.getByTestId('venues-screen').waitFor();
     await screenshot(page, 'venues-phone');
@@ -199,7 +181,7 @@ describe('works at phone size', () => {
     expect(await page.getByTestId('venue-name').innerText()).toBe('Harbour Light Gallery');
     expect(await page.getByTestId('venue-commission').innerText()).toBe('45.5%');
     const id = Number(new URL(page.url()).pathname.split('/').at(-1));
-    const detail = await (await page.request.get(`${server.url}/api/venues/${id}`)).json();
+    const detail = await (await page.request.get(`${env.server.url}/api/venues/${id}`)).json();
     expect(detail.venue.postcode).toBe('IP18 6EX');
     expect(detail.venue.defaultTerms).toMatchObject({
       commissionRateBp: 4550,
@@ -216,8 +198,8 @@ describe('works at phone size', () => {
 
 describe('works at wide size', () => {
   it('shows the works table, a work page, the venue form and settings', async () => {
-    const page = await newPage(browser, 'wide');
-    await signInToStudio(page, server.url);
+    const page = await newPage(env.browser, 'wide');
+    await signInToStudio(page, env.server.url);
     await page.getByTestId('nav-works').click();
     await page.getByTestId('works-table').waitFor();
     await page.getByTestId('sort-price').click();
@@ -225,16 +207,16 @@ describe('works at wide size', () => {
       document.querySelector('[data-testid="sort-price"]')?.closest('[aria-sort="ascending"]'),
     );
     const cheapest = await (
-      await page.request.get(`${server.url}/api/works?sort=price&pageSize=1`)
+      await page.request.get(`${env.server.url}/api/works?sort=price&pageSize=1`)
     ).json();
     await page.getByTestId(`work-row-${cheapest.items[0].id}`).waitFor();
     await screenshot(page, 'works-table-wide');
     await expectAccessible(page);
 
     // The work made at phone size, with its two photos.
-    const made = await (await page.request.get(`${server.url}/api/works?search=cider`)).json();
+    const made = await (await page.request.get(`${env.server.url}/api/works?search=cider`)).json();
     expect(made.items[0].photos).toHaveLength(2);
-    await page.goto(`${server.url}/works/${made.items[0].id}`);
+    await page.goto(`${env.server.url}/works/${made.items[0].id}`);
     await page.getByTestId('work-screen').waitFor();
     await page.getByTestId('work-cover').waitFor();
     await screenshot(page, 'work-page-wide');
@@ -242,17 +224,17 @@ describe('works at wide size', () => {
 
     // A consigned work cannot be deleted: the server's reason is shown.
     const consigned = await (
-      await page.request.get(`${server.url}/api/works?status=on-consignment&pageSize=1`)
+      await page.request.get(`${env.server.url}/api/works?status=on-consignment&pageSize=1`)
     ).json();
-    await page.goto(`${server.url}/works/${consigned.items[0].id}`);
+    await page.goto(`${env.server.url}/works/${consigned.items[0].id}`);
     await page.getByTestId('work-delete').click();
     await page.getByTestId('work-delete-confirm').click();
     await page.getByTestId('work-delete-refused').waitFor();
     expect(
-      (await page.request.get(`${server.url}/api/works/${consigned.items[0].id}`)).status(),
+      (await page.request.get(`${env.server.url}/api/works/${consigned.items[0].id}`)).status(),
     ).toBe(200);
 
-    await page.goto(`${server.url}/venues/new`);
+    await page.goto(`${env.server.url}/venues/new`);
     await page.getByTestId('venue-create-screen').waitFor();
     await page.getByTestId('net-preview-share').waitFor();
     await page.getByTestId('venue-commissionRate').fill('30');
@@ -260,7 +242,7 @@ describe('works at wide size', () => {
     await screenshot(page, 'venue-form-wide');
     await expectAccessible(page);
 
-    await page.goto(`${server.url}/settings`);
+    await page.goto(`${env.server.url}/settings`);
     await page.getByTestId('settings-pattern').waitFor();
     await screenshot(page, 'settings-wide');
     await expectAccessible(page);

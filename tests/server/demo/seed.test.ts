@@ -14,6 +14,7 @@ import { photoStore } from '@/server/photos/photo-store';
 import { termsSchema } from '@/shared/schemas/terms';
 import { venueCreateSchema } from '@/shared/schemas/venue';
 
+import { filesUnder } from '../../../scripts/lib/files';
 import { createTestApp } from '../helpers/test-app';
 
 type TestApp = Awaited<ReturnType<typeof createTestApp>>;
@@ -31,15 +32,6 @@ afterAll(async () => {
   await seeded.db.destroy();
   fs.rmSync(seeded.context.filesDir, { recursive: true, force: true });
 });
-
-function filesUnder(dir: string): string[] {
-  if (!fs.existsSync(dir)) return [];
-  return fs
-    .readdirSync(dir, { recursive: true, withFileTypes: true })
-    .filter((e) => e.isFile())
-    .map((e) => path.join(e.parentPath, e.name))
-    .sort();
-}
 
 async function rowCounts(db: TestApp['db']) {
   const tables = [

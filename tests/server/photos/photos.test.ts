@@ -5,6 +5,8 @@ import path from 'node:path';
 import sharp from 'sharp';
 import request from 'supertest';
 
+import { filesUnder } from '../../../scripts/lib/files';
+import { picture } from '../helpers/pictures';
 import {
   addConsignment,
   type Fixture,
@@ -17,21 +19,7 @@ const as = async (f: Fixture, who: Parameters<Fixture['cookie']>[0] = 'owner') =
   Cookie: await f.cookie(who),
 });
 
-/** A real picture, made by sharp itself. */
-const picture = (width: number, height: number, colour: string, format: 'jpeg' | 'png' = 'jpeg') =>
-  sharp({ create: { width, height, channels: 3, background: colour } })
-    [format]()
-    .toBuffer();
-
 const sha256 = (data: Buffer) => createHash('sha256').update(data).digest('hex');
-
-function filesUnder(dir: string): string[] {
-  if (!fs.existsSync(dir)) return [];
-  return fs
-    .readdirSync(dir, { recursive: true, withFileTypes: true })
-    .filter((e) => e.isFile())
-    .map((e) => path.join(e.parentPath, e.name));
-}
 
 async function upload(
   f: Fixture,

@@ -1,24 +1,14 @@
-import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 
-import sharp from 'sharp';
 import request from 'supertest';
 
+import { filesUnder } from '../../../scripts/lib/files';
+import { picture as solidPicture } from '../helpers/pictures';
 import { type Fixture, insertWork, studioFixture } from '../helpers/studio-fixture';
 
 const picture = (width: number, height: number, colour: string) =>
-  sharp({ create: { width, height, channels: 3, background: colour } })
-    .png()
-    .toBuffer();
-
-function filesUnder(dir: string): string[] {
-  if (!fs.existsSync(dir)) return [];
-  return fs
-    .readdirSync(dir, { recursive: true, withFileTypes: true })
-    .filter((e) => e.isFile())
-    .map((e) => path.join(e.parentPath, e.name));
-}
+  solidPicture(width, height, colour, 'png');
 
 const incoming = path.join(os.tmpdir(), 'saggar-incoming');
 

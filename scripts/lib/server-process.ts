@@ -24,8 +24,9 @@ export type ServerProcess = {
 };
 
 /**
- * The real server (`server/index.ts`, as `npm start` runs it) in a process of its own over a
- * database file the benchmark prepared, so the load it measures is not the load it makes.
+ * The real server (`server/index.ts`, as `npm start` runs it) in a process of its own, on a free
+ * port, over the database file given (seeded with the demo when it is empty): what the browser
+ * tests drive, and what the benchmarks load without measuring their own load.
  */
 export async function startServerProcess(
   dbFile: string,
@@ -42,17 +43,20 @@ export async function startServerProcess(
         PORT: String(port),
         HOST: '127.0.0.1',
         SAGGAR_DB: dbFile,
-        SAGGAR_WEB_ROOT: path.join(path.dirname(dbFile), 'no-web-app'),
         LOG_LEVEL: 'warn',
         ...env,
       },
-      stdio: ['ignore', 'ignore', 'inherit'],
+      stdio: ['ignore', 'pipe', 'pipe'],
     },
   );
+  let output = '';
+  child.stdout?.on('data', (d) => (output += d));
+  child.stderr?.on('data', (d) => (output += d));
   const url = `http://127.0.0.1:${port}`;
   for (let waited = 0; ; waited += 100) {
-    if (child.exitCode !== null) throw new Error('The server exited before it listened.');
-    if (waited > 30_000) throw new Error('The server did not start in 30 s.');
+    if (child.exitCode !== null)
+      throw new Error(`The server exited before it listened:\n${output}`);
+    if (waited > 60_000) throw new Error(`The server did not start in 60 s:\n${output}`);
     try {
       if ((await fetch(`${url}/api/health`)).ok) break;
     } catch {
