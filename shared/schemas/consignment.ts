@@ -1,5 +1,11 @@
 import { z } from 'zod';
 
+import { arrivalReportSchema, conditionCheckSchema, conditionDifferenceSchema } from './condition';
+import { isoDateSchema } from './dates';
+import { moneySchema, priceSchema } from './money';
+import { saleSplitSchema, termsSchema } from './terms';
+import { linesText, lineText } from './text';
+
 /** A batch's life: put together, terms agreed, sent, open to buyers, over, and paid up. */
 export const consignmentStates = [
   'draft',
@@ -31,8 +37,6 @@ export const lineStates = [
 export const lineStateSchema = z.enum(lineStates);
 export type LineState = z.infer<typeof lineStateSchema>;
 
-export const isoDateSchema = z.iso.date();
-
 /** One consignment as a list shows it, for the studio and for the venue. */
 export const consignmentSummarySchema = z.object({
   id: z.number().int(),
@@ -50,3 +54,184 @@ export const consignmentSummarySchema = z.object({
   linesSold: z.number().int(),
 });
 export type ConsignmentSummary = z.infer<typeof consignmentSummarySchema>;
+
+/** The dates of a show; each optional, and in order when given. */
+const consignmentDates = {
+  dispatchDate: isoDateSchema.nullable().optional(),
+  openingDate: isoDateSchema.nullable().optional(),
+  closingDate: isoDateSchema.nullable().optional(),
+  returnDueDate: isoDateSchema.nullable().optional(),
+};
+
+type Dates = { [K in keyof typeof consignmentDates]?: string | null };
+
+/** Dispatch, opening, closing and return come in that order; a date may equal the one before. */
+function datesInOrder(dates: Dates, ctx: z.RefinementCtx) {
+  const order = [
+    ['dispatchDate', 'sending'],
+    ['openingDate', 'opening'],
+    ['closingDate', 'closing'],
+    ['returnDueDate', 'return'],
+  ] as const;
+  let latest: { field: string; date: string } | null = null;
+  for (const [field, word] of order) {
+    const date = dates[field];
+    if (!date) continue;
+    if (latest && date < latest.date) {
+      ctx.addIssue({
+        code: 'custom',
+        path: [field],
+        message: `The ${word} date cannot come before the ${latest.field}.`,
+      });
+    }
+    latest = { field: `${word} date`, date };
+  }
+}
+
+/** `POST /api/consignments`: a new draft for one venue; its terms start from the venue's. */
+export const consignmentCreateSchema = z
+  .strictObject({
+    venueId: z
+      .number({ error: 'Choose the venue.' })
+      .int()
+      .positive({ error: 'Choose the venue.' }),
+    title: lineText('title', 200).min(1, { error: 'Give the show or batch a title.' }),
+    ...consignmentDates,
+    terms: termsSchema.optional(),
+  })
+  .superRefine(datesInOrder);
+export type ConsignmentCreate = z.input<typeof consignmentCreateSchema>;
+export type ConsignmentCreateParsed = z.output<typeof consignmentCreateSchema>;
+
+/** `PATCH /api/consignments/:id`, while it is a draft. */
+export const consignmentUpdateSchema = z
+  .strictObject({
+    title: lineText('title', 200).min(1, { error: 'Give the show or batch a title.' }),
+    ...consignmentDates,
+    terms: termsSchema,
+    notes: linesText('notes', 4000)
+      .transform((v) => (v === '' ? null : v))
+      .nullable(),
+  })
+  .partial()
+  .superRefine(datesInOrder);
+export type ConsignmentUpdate = z.input<typeof consignmentUpdateSchema>;
+export type ConsignmentUpdateParsed = z.output<typeof consignmentUpdateSchema>;
+
+/** `POST /api/consignments/:id/lines` */
+export const lineCreateSchema = z.strictObject({
+  workId: z.number({ error: 'Choose a work.' }).int().positive({ error: 'Choose a work.' }),
+  listPrice: priceSchema.optional(),
+});
+export type LineCreate = z.infer<typeof lineCreateSchema>;
+
+/** `PATCH /api/consignments/:id/lines/:lineId`, while the consignment is a draft. */
+export const lineUpdateSchema = z.strictObject({ listPrice: priceSchema });
+export type LineUpdate = z.infer<typeof lineUpdateSchema>;
+
+export const consignmentParamsSchema = z.strictObject({
+  id: z.coerce.number({ error: 'The id must be a number.' }).int().positive(),
+});
+export const lineParamsSchema = z.strictObject({
+  id: z.coerce.number({ error: 'The id must be a number.' }).int().positive(),
+  lineId: z.coerce.number({ error: 'The line id must be a number.' }).int().positive(),
+});
+export const lineOnlyParamsSchema = z.strictObject({
+  lineId: z.coerce.number({ error: 'The line id must be a number.' }).int().positive(),
+});
+
+/** `GET /api/consignments` */
+export const consignmentListQuerySchema = z.strictObject({
+  state: consignmentStateSchema.optional(),
+  venueId: z.coerce.number<number | string>().int().positive().optional(),
+});
+export type ConsignmentListQuery = z.input<typeof consignmentListQuerySchema>;
+
+export const consignmentListItemSchema = consignmentSummarySchema.extend({
+  /** Insurance value of the pieces still out, per the money engine's exposure. */
+  insuredOut: moneySchema.nullable(),
+  currency: z.string().nullable(),
+});
+export type ConsignmentListItem = z.infer<typeof consignmentListItemSchema>;
+
+export const consignmentListSchema = z.object({
+  items: z.array(consignmentListItemSchema),
+  total: z.number().int(),
+});
+export type ConsignmentList = z.infer<typeof consignmentListSchema>;
+
+/** Where a work is held when another consignment wants it. */
+export const workHoldSchema = z.object({
+  consignmentId: z.number().int(),
+  reference: z.string(),
+  title: z.string(),
+  state: consignmentStateSchema,
+});
+export type WorkHold = z.infer<typeof workHoldSchema>;
+
+export const consignmentLineSchema = z.object({
+  id: z.number().int(),
+  workId: z.number().int(),
+  stockNumber: z.string(),
+  title: z.string(),
+  thumbnailUrl: z.string().nullable(),
+  listPrice: moneySchema,
+  insuranceValue: moneySchema,
+  state: lineStateSchema,
+  /** A sale at the list price under the consignment's terms, by the money engine. */
+  split: saleSplitSchema.nullable(),
+  dispatchCheck: conditionCheckSchema.nullable(),
+  arrivalCheck: conditionCheckSchema.nullable(),
+  /** What the arrival check found that the dispatch check did not (or no longer). */
+  differences: z.array(conditionDifferenceSchema),
+  weightG: z.number().int().nullable(),
+});
+export type ConsignmentLine = z.infer<typeof consignmentLineSchema>;
+
+export const consignmentTotalsSchema = z.object({
+  listPrice: moneySchema,
+  commission: moneySchema,
+  vatOnCommission: moneySchema,
+  makerShare: moneySchema,
+  insuranceValue: moneySchema,
+});
+
+/** `GET /api/consignments/:id` */
+export const consignmentSchema = z.object({
+  id: z.number().int(),
+  reference: z.string(),
+  title: z.string(),
+  state: consignmentStateSchema,
+  venue: z.object({
+    id: z.number().int(),
+    name: z.string(),
+    email: z.string().nullable(),
+    contactName: z.string().nullable(),
+  }),
+  dispatchDate: isoDateSchema.nullable(),
+  openingDate: isoDateSchema.nullable(),
+  closingDate: isoDateSchema.nullable(),
+  returnDueDate: isoDateSchema.nullable(),
+  terms: termsSchema,
+  notes: z.string().nullable(),
+  agreedAt: z.string().nullable(),
+  dispatchedAt: z.string().nullable(),
+  acknowledgedAt: z.string().nullable(),
+  acknowledgedBy: z.string().nullable(),
+  lines: z.array(consignmentLineSchema),
+  /** Null while the consignment has no pieces. */
+  totals: consignmentTotalsSchema.nullable(),
+  /** The insurance value of the pieces still out now. */
+  insuredOut: moneySchema,
+  createdAt: z.string(),
+});
+export type Consignment = z.infer<typeof consignmentSchema>;
+
+/** `POST /api/consignments/:id/acknowledge` (the venue): what arrived and in what state. */
+export const acknowledgeSchema = z.strictObject({
+  reports: z
+    .array(arrivalReportSchema, { error: 'Send a condition check for each piece.' })
+    .min(1, { error: 'Send a condition check for each piece.' })
+    .max(500),
+});
+export type Acknowledge = z.infer<typeof acknowledgeSchema>;

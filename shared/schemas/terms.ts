@@ -67,7 +67,10 @@ export const termsSchema = z
     discountRule: discountRuleSchema,
     insuranceBasis: insuranceBasisSchema,
     agreedInsuranceValue: priceSchema.optional(),
+    /** Who insures the work on the venue's premises. */
     insuredBy: insurerSchema,
+    /** Who insures it in transit, both ways; venues often cover their premises only. */
+    insuredInTransitBy: insurerSchema.default('maker'),
     paymentTerms: paymentTermsSchema,
   })
   .superRefine((terms, ctx) => {
@@ -100,6 +103,7 @@ export const defaultTerms: Readonly<Terms> = Object.freeze({
   discountRule: 'shared',
   insuranceBasis: 'maker-net',
   insuredBy: 'venue',
+  insuredInTransitBy: 'maker',
   paymentTerms: Object.freeze({ days: 30, from: 'month-end' }),
 } as const);
 

@@ -1,7 +1,8 @@
 import { z } from 'zod';
 
 import { conditionGradeSchema, conditionStageSchema } from './condition';
-import { consignmentStateSchema, isoDateSchema, lineStateSchema } from './consignment';
+import { consignmentStateSchema, lineStateSchema } from './consignment';
+import { isoDateSchema } from './dates';
 import { moneySchema } from './money';
 
 /** `GET /api/works/:id/history`: every consignment the work has been on, newest first. */

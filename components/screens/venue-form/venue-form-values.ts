@@ -40,6 +40,7 @@ export type TermsFormValues = {
   insuranceBasis: InsuranceBasis;
   agreedInsuranceValue: string;
   insuredBy: Insurer;
+  insuredInTransitBy: Insurer;
   paymentDays: string;
   paymentFrom: PaymentTerms['from'];
 };
@@ -70,6 +71,7 @@ export function termsValues(terms: Terms): TermsFormValues {
     insuranceBasis: terms.insuranceBasis,
     agreedInsuranceValue: moneyText(terms.agreedInsuranceValue),
     insuredBy: terms.insuredBy,
+    insuredInTransitBy: terms.insuredInTransitBy,
     paymentDays: String(terms.paymentTerms.days),
     paymentFrom: terms.paymentTerms.from,
   };
@@ -144,6 +146,7 @@ function termsFields(prefix: string, sent: () => boolean): FieldBindings<TermsFo
       blank: 'omit',
     },
     insuredBy: { ...at('insuredBy'), read: choiceCodec },
+    insuredInTransitBy: { ...at('insuredInTransitBy'), read: choiceCodec },
     paymentDays: { ...at('paymentTerms.days'), read: numberCodec },
     paymentFrom: { ...at('paymentTerms.from'), read: choiceCodec },
   };

@@ -147,7 +147,14 @@ export function VenueForm<Parsed>({
         {...field}
         name="insuredBy"
         testID="venue-insuredBy"
-        label="Who insures"
+        label="Who insures on the premises"
+        options={options(insurerWords)}
+      />
+      <FormChoice
+        {...field}
+        name="insuredInTransitBy"
+        testID="venue-insuredInTransitBy"
+        label="Who insures in transit"
         options={options(insurerWords)}
       />
       <FieldRow>

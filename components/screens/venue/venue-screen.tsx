@@ -86,7 +86,8 @@ function VenueBody({ detail }: { detail: VenueDetail }) {
                   ? `${insuranceBasisWords.agreed}: ${formatMoney(terms.agreedInsuranceValue)}`
                   : insuranceBasisWords[terms.insuranceBasis],
             },
-            { label: 'Insured by', value: insurerWords[terms.insuredBy] },
+            { label: 'Insured on the premises by', value: insurerWords[terms.insuredBy] },
+            { label: 'Insured in transit by', value: insurerWords[terms.insuredInTransitBy] },
             {
               label: 'Payment',
               value: `Within ${terms.paymentTerms.days} days of ${paymentFromWords[terms.paymentTerms.from]}`,

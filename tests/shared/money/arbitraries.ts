@@ -40,6 +40,7 @@ export function termsArb(currency: string): fc.Arbitrary<Terms> {
       insuranceBasis: fc.constantFrom('maker-net', 'retail', 'agreed'),
       agreed: amountArb,
       insuredBy: fc.constantFrom(...insurers),
+      insuredInTransitBy: fc.constantFrom(...insurers),
       days: fc.integer({ min: 0, max: 365 }),
       from: fc.constantFrom(...paymentTermsStarts),
     })
