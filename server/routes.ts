@@ -2,10 +2,14 @@ import express, { type Express } from 'express';
 
 import { authenticate, requireRole } from './access/authenticate';
 import { authRouter } from './auth/auth.router';
+import { conditionReportsRouter } from './condition/condition.router';
+import { conditionPhotosRouter } from './condition/condition-photos.router';
+import { consignmentsRouter } from './consignments/consignments.router';
 import { type AppContext } from './context';
 import { healthRouter } from './health/health.router';
 import { apiNotFound } from './http/error-handler';
 import { sameOrigin } from './http/same-origin';
+import { invitationsRouter } from './invitations/invitations.router';
 import { meRouter } from './me/me.router';
 import { overviewRouter } from './overview/overview.router';
 import { photoFilesRouter, workPhotosRouter } from './photos/photos.router';
@@ -42,6 +46,10 @@ export function mountApi(app: Express, context: AppContext): void {
   app.use('/api/works/:id/photos', workPhotosRouter(context));
   app.use('/api/works', worksRouter(context));
   app.use('/api/photos', photoFilesRouter(context));
+  app.use('/api/consignments', consignmentsRouter(context));
+  app.use('/api/consignment-lines/:lineId/condition-reports', conditionReportsRouter(context));
+  app.use('/api/condition-photos', conditionPhotosRouter(context));
+  app.use('/api/invitations', invitationsRouter(context));
 
   app.use('/api', apiNotFound);
 }

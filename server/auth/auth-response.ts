@@ -55,3 +55,28 @@ export async function passToAuth({ auth }: AppContext, req: Request, res: Respon
   sendError(res, toApiError(response.status, body));
   return response;
 }
+
+/**
+ * Signs a person in through better-auth with credentials the server already holds (a password
+ * just chosen on an invitation), and sends its answer: the user, and the session cookie.
+ */
+export async function passToAuthSignIn(
+  { auth }: AppContext,
+  req: Request,
+  res: Response,
+  credentials: { email: string; password: string },
+) {
+  const base = `${req.protocol}://${req.get('host')}`;
+  const response = await auth.handler(
+    new globalThis.Request(`${base}/api/auth/sign-in/email`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json', 'user-agent': req.get('user-agent') ?? '' },
+      body: JSON.stringify(credentials),
+    }),
+  );
+  if (!response.ok) {
+    sendError(res, toApiError(response.status, await response.json().catch(() => null)));
+    return;
+  }
+  await setResponse(res, response);
+}

@@ -1,4 +1,4 @@
-import { hashPassword } from 'better-auth/crypto';
+import { hashPassword, verifyPassword } from 'better-auth/crypto';
 
 import { type Db } from '../db/database';
 
@@ -26,4 +26,15 @@ export async function createUserWithPassword(db: Db, person: NewPerson): Promise
     })
     .execute();
   return id;
+}
+
+/** Whether the password is the one the person's e-mail-and-password account holds. */
+export async function passwordMatches(db: Db, userId: string, password: string): Promise<boolean> {
+  const account = await db
+    .selectFrom('accounts')
+    .select('password')
+    .where('user_id', '=', userId)
+    .where('provider_id', '=', 'credential')
+    .executeTakeFirst();
+  return account?.password ? verifyPassword({ hash: account.password, password }) : false;
 }

@@ -173,7 +173,10 @@ async function seedDemo(db: Db, photos: DemoPhoto[][]): Promise<void> {
           closing_date: c.closingDate,
           return_due_date: c.returnDueDate,
           terms: JSON.stringify(terms),
-          agreed_at: `${c.dispatchDate}T09:00:00.000Z`,
+          agreed_at: `${c.agreedOn}T10:00:00.000Z`,
+          dispatched_at: `${c.dispatchDate}T09:00:00.000Z`,
+          acknowledged_at: `${c.arrival.on}T11:00:00.000Z`,
+          acknowledged_by: c.venue === 'lanthorn' ? gallery : assistant,
         })
         .returning('id')
         .executeTakeFirstOrThrow();
@@ -183,7 +186,7 @@ async function seedDemo(db: Db, photos: DemoPhoto[][]): Promise<void> {
         const listPrice = { amount: work.pricePence, currency: 'GBP' };
         const sold = 'sold' in line ? line.sold : null;
         const recorder = c.venue === 'lanthorn' ? gallery : assistant;
-        await trx
+        const { id: lineId } = await trx
           .insertInto('consignment_lines')
           .values({
             studio_id: studioId,
@@ -198,8 +201,40 @@ async function seedDemo(db: Db, photos: DemoPhoto[][]): Promise<void> {
             discount: sold ? work.pricePence - sold.price : null,
             sale_recorded_by: sold ? recorder : null,
             sale_recorded_at: sold ? `${sold.on}T16:30:00.000Z` : null,
+            holds_work: sold ? null : 1,
           })
-          .execute();
+          .returning('id')
+          .executeTakeFirstOrThrow();
+        const found = 'finding' in line ? [line.finding] : [];
+        for (const [stage, on, examiner, by] of [
+          ['dispatch', c.dispatchDate, demoSignIns.people[1].name, assistant],
+          [
+            'arrival',
+            c.arrival.on,
+            c.arrival.examiner,
+            c.venue === 'lanthorn' ? gallery : assistant,
+          ],
+        ] as const) {
+          const { id: reportId } = await trx
+            .insertInto('condition_reports')
+            .values({
+              studio_id: studioId,
+              work_id: workIds[line.work]!,
+              consignment_line_id: lineId,
+              stage,
+              examiner_name: examiner,
+              examined_by: by,
+              examined_on: on,
+            })
+            .returning('id')
+            .executeTakeFirstOrThrow();
+          for (const finding of found) {
+            await trx
+              .insertInto('condition_findings')
+              .values({ report_id: reportId, ...finding, size_mm: null, photo_file_id: null })
+              .execute();
+          }
+        }
       }
     }
   });

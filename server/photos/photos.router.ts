@@ -11,9 +11,10 @@ import { requireRole, scopeOf } from '../access/authenticate';
 import { type AppContext } from '../context';
 import { notFound } from '../http/http-error';
 import { validate } from '../http/validate';
-import { photoStore, renditionMimeType } from './photo-store';
+import { photoStore } from './photo-store';
 import { findPhotoFile } from './photos.repository';
 import { deletePhoto, setPhotoOrder, uploadPhotos } from './photos.service';
+import { sendRendition } from './send-rendition';
 import { receivePhotos, uploadedFiles } from './upload';
 
 const upload = validate({ params: idParamsSchema });
@@ -43,29 +44,14 @@ export function workPhotosRouter({ db, filesDir }: AppContext) {
 
 /**
  * `/api/photos/:photoId` and `…/thumbnail`: the picture as shown, to any member whose scope can see
- * the work (a venue's staff see the works it holds). A photo id's content never changes, so the
- * browser may keep it; `private` keeps shared caches out.
+ * the work (a venue's staff see the works it holds).
  */
 export function photoFilesRouter({ db, filesDir }: AppContext) {
   const store = photoStore(filesDir);
   const send = async (res: Response, variant: 'display' | 'thumbnail') => {
     const photo = await findPhotoFile(db, scopeOf(res), file.input(res).params.photoId);
     if (!photo) throw notFound('That photo');
-    const thumbnail = variant === 'thumbnail';
-    res.type(renditionMimeType);
-    res.set('Cache-Control', 'private, max-age=31536000, immutable');
-    res.set('ETag', `"${photo.sha256}-${variant}"`);
-    const path = thumbnail ? store.thumbnailPath(photo.sha256) : store.displayPath(photo.sha256);
-    await new Promise<void>((resolve, reject) => {
-      res.sendFile(path, { etag: false, lastModified: false, cacheControl: false }, (err) => {
-        if (!err) return resolve();
-        // The error answer must not be kept like the picture would have been.
-        res.removeHeader('Cache-Control');
-        res.removeHeader('ETag');
-        const missing = (err as NodeJS.ErrnoException).code === 'ENOENT';
-        reject(missing ? notFound('That photo') : err);
-      });
-    });
+    await sendRendition(res, store, photo.sha256, variant);
   };
   return express
     .Router()

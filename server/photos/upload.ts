@@ -16,15 +16,17 @@ export const maxPhotosPerUpload = 10;
  */
 const incoming = path.join(os.tmpdir(), 'saggar-incoming');
 
-const upload = multer({
-  storage: multer.diskStorage({
-    destination: (_req, _file, done) =>
-      fs.mkdir(incoming, { recursive: true }, (err) => done(err ?? null, incoming)),
-  }),
-  limits: { fileSize: maxPhotoBytes, files: maxPhotosPerUpload, fields: 5, parts: 20 },
-  fileFilter: (_req, file, done) =>
-    unreadableName(file.originalname) ? done(badName()) : done(null, true),
-}).array('photos', maxPhotosPerUpload);
+function uploadOf(field: string, max: number) {
+  return multer({
+    storage: multer.diskStorage({
+      destination: (_req, _file, done) =>
+        fs.mkdir(incoming, { recursive: true }, (err) => done(err ?? null, incoming)),
+    }),
+    limits: { fileSize: maxPhotoBytes, files: max, fields: 5, parts: max + 10 },
+    fileFilter: (_req, file, done) =>
+      unreadableName(file.originalname) ? done(badName()) : done(null, true),
+  }).array(field, max);
+}
 
 /** A file name with NUL or another control character is refused, not stored. */
 const unreadableName = (name: string) => /[\u0000-\u001f\u007f]/.test(name);
@@ -39,7 +41,7 @@ const isSystemError = (err: unknown) => typeof (err as { syscall?: unknown }).sy
  * it cannot parse (no boundary, a truncated body, a malformed part header, multipart/mixed):
  * those are the client's, answered 400.
  */
-function toUploadError(err: unknown): unknown {
+function toUploadError(err: unknown, field: string, max: number): unknown {
   if (err instanceof HttpError || isSystemError(err)) return err;
   if (!(err instanceof multer.MulterError)) {
     return new HttpError('invalid_request', 'The upload could not be read. Try again.');
@@ -49,11 +51,11 @@ function toUploadError(err: unknown): unknown {
       return new HttpError('payload_too_large', 'Each photo must be 15 MB or smaller.');
     case 'LIMIT_FILE_COUNT':
     case 'LIMIT_UNEXPECTED_FILE':
-      return err.field && err.field !== 'photos'
-        ? new HttpError('invalid_request', 'Send the photos in the “photos” field.')
+      return err.field && err.field !== field
+        ? new HttpError('invalid_request', `Send the photos in the “${field}” field.`)
         : new HttpError(
             'invalid_request',
-            `Upload at most ${maxPhotosPerUpload} photos at a time.`,
+            max === 1 ? 'Upload one photo at a time.' : `Upload at most ${max} photos at a time.`,
           );
     default:
       return new HttpError('invalid_request', 'The upload could not be read. Try again.');
@@ -68,14 +70,20 @@ function removeReceived(req: Request): void {
 }
 
 /**
- * Reads a multipart upload of photos (field `photos`) to temporary files. multer checks only
- * sizes, counts and names; whether each file really is an image is sharp's job (photo-store.ts).
- * The files are removed when the response ends, however it ends.
+ * Reads a multipart upload of up to `max` photos in `field` to temporary files. multer checks
+ * only sizes, counts and names; whether each file really is an image is sharp's job
+ * (photo-store.ts). The files are removed when the response ends, however it ends.
  */
-export const receivePhotos: RequestHandler = (req, res, next) => {
-  res.on('close', () => removeReceived(req));
-  upload(req, res, (err?: unknown) => next(err ? toUploadError(err) : undefined));
-};
+export function receiveImages(field: string, max: number): RequestHandler {
+  const upload = uploadOf(field, max);
+  return (req, res, next) => {
+    res.on('close', () => removeReceived(req));
+    upload(req, res, (err?: unknown) => next(err ? toUploadError(err, field, max) : undefined));
+  };
+}
+
+/** A work's photos: up to ten at a time in `photos`. */
+export const receivePhotos = receiveImages('photos', maxPhotosPerUpload);
 
 export function uploadedFiles(req: Request): Express.Multer.File[] {
   return Array.isArray(req.files) ? req.files : [];

@@ -1,3 +1,4 @@
+import { type ConsignmentState } from '@/shared/schemas/consignment';
 import {
   type Photo,
   type Work,
@@ -11,6 +12,9 @@ import { type NewWorkRow, type WorkRow, type WorkUpdate } from '../db/schema/wor
 /** A works row as the list and detail queries select it: its place comes from its latest line. */
 export type WorkListRow = Omit<WorkRow, 'studio_id'> & {
   status: WorkStatus;
+  placed_consignment_id: number | null;
+  placed_reference: string | null;
+  placed_state: ConsignmentState | null;
   venue_id: number | null;
   venue_name: string | null;
 };
@@ -60,6 +64,14 @@ export function toWork(row: WorkListRow, photos: Photo[]): Work {
     venue:
       row.status === 'on-consignment' && row.venue_id !== null && row.venue_name !== null
         ? { id: row.venue_id, name: row.venue_name }
+        : null,
+    consignment:
+      row.placed_consignment_id !== null && row.placed_reference !== null
+        ? {
+            id: row.placed_consignment_id,
+            reference: row.placed_reference,
+            reserved: row.status === 'in-studio',
+          }
         : null,
     photos,
     archivedAt: row.archived_at,

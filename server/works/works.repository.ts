@@ -36,7 +36,7 @@ function worksWithPlace(db: Db, scope: Scope) {
 
 type WorksWithPlace = ReturnType<typeof worksWithPlace>;
 
-const status = statusFromLatestLine(sql.ref('latest.state'));
+const status = statusFromLatestLine(sql.ref('latest.state'), sql.ref('placed.state'));
 
 /** Statuses sort in the order a work moves through them, not alphabetically. */
 const statusRank = sql<number>`case ${status} ${sql.join(
@@ -119,6 +119,9 @@ function selectWork(query: WorksWithPlace) {
     'works.created_at',
     'works.updated_at',
     status.as('status'),
+    'placed.id as placed_consignment_id',
+    'placed.reference as placed_reference',
+    'placed.state as placed_state',
     'placed.venue_id as venue_id',
     'place_venue.name as venue_name',
   ]);

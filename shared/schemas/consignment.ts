@@ -65,27 +65,36 @@ const consignmentDates = {
 
 type Dates = { [K in keyof typeof consignmentDates]?: string | null };
 
-/** Dispatch, opening, closing and return come in that order; a date may equal the one before. */
-function datesInOrder(dates: Dates, ctx: z.RefinementCtx) {
+/**
+ * Dispatch, opening, closing and return come in that order (a date may equal the one before):
+ * the issues of the dates given that break it. The server checks a draft's dates again once an
+ * edit is merged into them.
+ */
+export function consignmentDateIssues(dates: Dates) {
   const order = [
     ['dispatchDate', 'sending'],
     ['openingDate', 'opening'],
     ['closingDate', 'closing'],
     ['returnDueDate', 'return'],
   ] as const;
-  let latest: { field: string; date: string } | null = null;
+  const issues: { path: string[]; message: string }[] = [];
+  let latest: { word: string; date: string } | null = null;
   for (const [field, word] of order) {
     const date = dates[field];
     if (!date) continue;
     if (latest && date < latest.date) {
-      ctx.addIssue({
-        code: 'custom',
+      issues.push({
         path: [field],
-        message: `The ${word} date cannot come before the ${latest.field}.`,
+        message: `The ${word} date cannot come before the ${latest.word} date.`,
       });
     }
-    latest = { field: `${word} date`, date };
+    latest = { word, date };
   }
+  return issues;
+}
+
+function datesInOrder(dates: Dates, ctx: z.RefinementCtx) {
+  for (const issue of consignmentDateIssues(dates)) ctx.addIssue({ code: 'custom', ...issue });
 }
 
 /** `POST /api/consignments`: a new draft for one venue; its terms start from the venue's. */

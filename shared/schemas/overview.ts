@@ -1,6 +1,7 @@
 import { z } from 'zod';
 
 import { consignmentSummarySchema } from './consignment';
+import { moneySchema } from './money';
 import { workStatusSchema } from './work';
 
 /** `GET /api/overview`: the studio's figures at a glance. */
@@ -15,6 +16,25 @@ export const overviewSchema = z.object({
     outCount: z.number().int(),
     out: z.array(consignmentSummarySchema),
   }),
+  /**
+   * What is at risk: the insurance value of every piece out, per venue and in all, one entry per
+   * currency (amounts in different currencies are never added together).
+   */
+  exposure: z.array(
+    z.object({
+      currency: z.string(),
+      total: moneySchema,
+      lineCount: z.number().int(),
+      byVenue: z.array(
+        z.object({
+          venueId: z.number().int(),
+          venueName: z.string(),
+          value: moneySchema,
+          lineCount: z.number().int(),
+        }),
+      ),
+    }),
+  ),
 });
 export type Overview = z.infer<typeof overviewSchema>;
 

@@ -126,6 +126,13 @@ export const workSchema = z.object({
   status: workStatusSchema,
   /** Where it is when on consignment. */
   venue: z.object({ id: z.number().int(), name: z.string() }).nullable(),
+  /**
+   * The open consignment holding it: sent (`reserved` false), or still being put together, when
+   * the work is in the studio but reserved for it.
+   */
+  consignment: z
+    .object({ id: z.number().int(), reference: z.string(), reserved: z.boolean() })
+    .nullable(),
   photos: z.array(photoSchema),
   archivedAt: z.string().nullable(),
   createdAt: z.string(),

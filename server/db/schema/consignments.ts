@@ -16,6 +16,10 @@ export interface ConsignmentsTable {
   /** JSON of the shared Terms schema, copied from the venue at agreement */
   terms: string | null;
   agreed_at: string | null;
+  dispatched_at: string | null;
+  acknowledged_at: string | null;
+  acknowledged_by: string | null;
+  cancelled_at: string | null;
   notes: string | null;
   created_at: Generated<string>;
   updated_at: Generated<string>;
@@ -41,6 +45,8 @@ export interface ConsignmentLinesTable {
   sale_recorded_at: string | null;
   /** the day it was returned, found damaged or declared lost */
   resolved_on: string | null;
+  /** 1 while this line holds its work on an open consignment, null otherwise (unique per work) */
+  holds_work: 1 | null;
   created_at: Generated<string>;
   updated_at: Generated<string>;
 }

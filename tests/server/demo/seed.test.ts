@@ -136,14 +136,15 @@ describe('the demo seed', () => {
     expect(parsed.vatNumber).toBe(vatNumber);
   });
 
-  it('has one consignment on show with two sales and one closed, waiting to be reconciled', async () => {
+  it('has two consignments on show, one with two sales, one past its closing date with pieces out', async () => {
     const { db } = seeded;
     const consignments = await db
       .selectFrom('consignments')
-      .select(['id', 'state'])
+      .select(['id', 'state', 'closing_date'])
       .orderBy('id')
       .execute();
-    expect(consignments.map((c) => c.state)).toEqual(['on-show', 'closed']);
+    expect(consignments.map((c) => c.state)).toEqual(['on-show', 'on-show']);
+    expect(consignments[1]!.closing_date! < new Date().toISOString().slice(0, 10)).toBe(true);
     const lines = await db
       .selectFrom('consignment_lines')
       .select(['consignment_id', 'state'])
@@ -156,6 +157,23 @@ describe('the demo seed', () => {
       (l) => l.consignment_id === consignments[1]!.id && l.state === 'consigned',
     );
     expect(closedUnresolved.length).toBeGreaterThan(0);
+  });
+
+  it('holds each work still out, and checked each piece at dispatch and on arrival', async () => {
+    const { db } = seeded;
+    const lines = await db
+      .selectFrom('consignment_lines')
+      .select(['id', 'state', 'holds_work'])
+      .execute();
+    for (const line of lines) expect(line.holds_work).toBe(line.state === 'consigned' ? 1 : null);
+    const reports = await db
+      .selectFrom('condition_reports')
+      .select(['consignment_line_id', 'stage'])
+      .execute();
+    for (const line of lines) {
+      const stages = reports.filter((r) => r.consignment_line_id === line.id).map((r) => r.stage);
+      expect(stages.sort()).toEqual(['arrival', 'dispatch']);
+    }
   });
 
   it('lets every demo person sign in with the demo password', async () => {

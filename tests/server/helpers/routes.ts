@@ -1,7 +1,12 @@
 type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
 
 /** Routes anyone may call. */
-export const publicRoutes = ['GET /api/health', 'POST /api/auth/sign-in/email'] as const;
+export const publicRoutes = [
+  'GET /api/health',
+  'POST /api/auth/sign-in/email',
+  'GET /api/invitations/lookup',
+  'POST /api/invitations/accept',
+] as const;
 
 /**
  * Every API route behind sign-in, with the roles that may use it. The access tests walk the
@@ -41,6 +46,27 @@ export const protectedRoutes: {
   { route: 'POST /api/venues', roles: ['owner', 'assistant'] },
   { route: 'GET /api/venues/:id', roles: ['owner', 'assistant'] },
   { route: 'PATCH /api/venues/:id', roles: ['owner', 'assistant'] },
+  { route: 'GET /api/consignments', roles: ['owner', 'assistant', 'gallery'] },
+  { route: 'POST /api/consignments', roles: ['owner', 'assistant'] },
+  { route: 'GET /api/consignments/:id', roles: ['owner', 'assistant', 'gallery'] },
+  { route: 'PATCH /api/consignments/:id', roles: ['owner', 'assistant'] },
+  { route: 'POST /api/consignments/:id/lines', roles: ['owner', 'assistant'] },
+  { route: 'PATCH /api/consignments/:id/lines/:lineId', roles: ['owner', 'assistant'] },
+  { route: 'DELETE /api/consignments/:id/lines/:lineId', roles: ['owner', 'assistant'] },
+  { route: 'POST /api/consignments/:id/agree', roles: ['owner', 'assistant'] },
+  { route: 'POST /api/consignments/:id/dispatch', roles: ['owner', 'assistant'] },
+  { route: 'POST /api/consignments/:id/cancel', roles: ['owner', 'assistant'] },
+  { route: 'POST /api/consignments/:id/acknowledge', roles: ['gallery'] },
+  { route: 'POST /api/condition-photos', roles: ['owner', 'assistant', 'gallery'] },
+  { route: 'GET /api/condition-photos/:fileId', roles: ['owner', 'assistant', 'gallery'] },
+  {
+    route: 'GET /api/condition-photos/:fileId/thumbnail',
+    roles: ['owner', 'assistant', 'gallery'],
+  },
+  {
+    route: 'POST /api/consignment-lines/:lineId/condition-reports',
+    roles: ['owner', 'assistant', 'gallery'],
+  },
 ];
 
 /** A route's method (lower case, as supertest names it) and a path with an id for each parameter. */
