@@ -84,38 +84,30 @@ function inMargins(doc: Doc, draw: () => void): void {
   doc.page.margins = margins;
 }
 
+/** Margins of at least this much hold a ruled header or footer; narrower ones a single line. */
+const roomyMargin = mm(20);
+
 function drawChrome(doc: Doc, frame: PageFrame, n: number, of: number): void {
   const style = { header: type.chromeStrong, text: type.chrome };
   const { left, right, top, bottom } = doc.page.margins;
   const width = doc.page.width - left - right;
-  const headerY = top - mm(14);
-  const footerY = doc.page.height - bottom + mm(9);
-  inMargins(doc, () => {
-    writeText(doc, frame.studioName, left, headerY, style.header, { lineBreak: false });
-    const what = `${frame.documentName} · ${frame.reference}`;
-    writeText(doc, what, left + width - textWidth(doc, what, style.text), headerY + 1.5, style.text, {
+  const headerY = top >= roomyMargin ? top - mm(14) : top / 2 - 5;
+  const footerY = bottom >= roomyMargin ? doc.page.height - bottom + mm(9) : doc.page.height - bottom / 2 - 4;
+  const hairline = (y: number, weight: number, colour: string) =>
+    doc.moveTo(left, y).lineTo(left + width, y).lineWidth(weight).strokeColor(colour).stroke();
+  const atRight = (words: string, y: number) =>
+    writeText(doc, words, left + width - textWidth(doc, words, style.text), y, style.text, {
       lineBreak: false,
     });
-    doc
-      .moveTo(left, headerY + 15)
-      .lineTo(left + width, headerY + 15)
-      .lineWidth(0.75)
-      .strokeColor(colours.accent)
-      .stroke();
-
-    doc
-      .moveTo(left, footerY - 6)
-      .lineTo(left + width, footerY - 6)
-      .lineWidth(0.4)
-      .strokeColor(colours.rule)
-      .stroke();
+  inMargins(doc, () => {
+    writeText(doc, frame.studioName, left, headerY, style.header, { lineBreak: false });
+    atRight(`${frame.documentName} · ${frame.reference}`, headerY + 1.5);
+    if (top >= roomyMargin) hairline(headerY + 15, 0.75, colours.accent);
+    if (bottom >= roomyMargin) hairline(footerY - 6, 0.4, colours.rule);
     writeText(doc, `${frame.venueName} · ${frame.reference}`, left, footerY, style.text, {
       lineBreak: false,
     });
-    const page = `Page ${n} of ${of}`;
-    writeText(doc, page, left + width - textWidth(doc, page, style.text), footerY, style.text, {
-      lineBreak: false,
-    });
+    atRight(`Page ${n} of ${of}`, footerY);
   });
 }
 

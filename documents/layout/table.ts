@@ -17,12 +17,18 @@ export type TableRow = {
   below?: { from: number; box: Box };
   /** Totals: a firmer rule above, none below. */
   total?: boolean;
+  /** Never the first row on a page: it moves there with the row before it. */
+  keepWithPrevious?: boolean;
 };
 
 export type TableOptions = {
   columns: readonly Column[];
   rows: readonly TableRow[];
   headerStyle?: TextStyle;
+  /** Drawn above the header on the table's first page, and kept with its header and first row. */
+  caption?: Box;
+  /** Drawn above the header on the pages the table runs onto (the caption, by default). */
+  captionContinued?: Box;
   padX?: number;
   padY?: number;
 };
@@ -74,18 +80,30 @@ export function drawTable(doc: Doc, options: TableOptions): void {
     return y + headerHeight;
   };
 
+  const start = (y: number, caption: Box | undefined) => {
+    if (!caption) return drawHeader(y);
+    caption.draw(doc, left, y, width);
+    return drawHeader(y + caption.height(doc, width));
+  };
+  const firstCaption = options.caption;
+  const nextCaption = options.captionContinued ?? options.caption;
+
   let y = doc.y;
   let first = true;
-  for (const row of rows) {
-    const measured = measure(row);
-    // The header only starts where its first row fits under it.
-    const needed = measured.height + (first ? headerHeight : 0);
+  const sizes = rows.map(measure);
+  sizes.forEach((measured, index) => {
+    const { row } = measured;
+    // A row goes to the next page when it, and the row that must stay with it, do not fit; the
+    // caption and header only start where their first row fits under them.
+    const next = sizes[index + 1];
+    const withNext = next?.row.keepWithPrevious ? next.height : 0;
+    const lead = first ? (firstCaption?.height(doc, width) ?? 0) + headerHeight : 0;
+    const needed = lead + measured.height + withNext;
     if (y + needed > contentBottom(doc) && y > contentTop(doc)) {
       doc.addPage();
-      y = contentTop(doc);
-      y = drawHeader(y);
+      y = start(contentTop(doc), first ? firstCaption : nextCaption);
     } else if (first) {
-      y = drawHeader(y);
+      y = start(y, firstCaption);
     }
     first = false;
     if (row.total) rule(y, 0.75, colours.ink);
@@ -98,8 +116,8 @@ export function drawTable(doc: Doc, options: TableOptions): void {
     }
     y += measured.height;
     if (!row.total) rule(y, 0.4, colours.rule);
-  }
-  if (first) y = drawHeader(y);
+  });
+  if (first) y = start(y, firstCaption);
   doc.x = left;
   doc.y = y;
 }
