@@ -59,18 +59,57 @@ const styles = {
   stock: { font: 'text', size: 7.5, figures: true },
 } as const satisfies Record<string, TextStyle>;
 
-type Block = { text: string; style: TextStyle; gapBefore: number };
+type Block = {
+  text: string;
+  style: TextStyle;
+  gapBefore: number;
+  /** Blocks that may be cut short, with an ellipsis, when nothing else makes room: first first. */
+  shortenOrder?: number;
+  /** The height it is cut to. */
+  limit?: number;
+};
 
 /** The words of a label, top to bottom, at a scale. */
 function blocks(label: LabelData, k: number): Block[] {
   const all: Block[] = [
-    { text: label.title, style: scaled(styles.title, k), gapBefore: 3 },
-    { text: label.materials, style: scaled(styles.detail, k), gapBefore: 2 },
+    { text: label.title, style: scaled(styles.title, k), gapBefore: 3, shortenOrder: 2 },
+    { text: label.materials, style: scaled(styles.detail, k), gapBefore: 2, shortenOrder: 1 },
     { text: label.dimensions, style: scaled(styles.dimensions, k), gapBefore: 1 },
-    { text: label.careNote ?? '', style: scaled(styles.note, k), gapBefore: 5 },
+    { text: label.careNote ?? '', style: scaled(styles.note, k), gapBefore: 5, shortenOrder: 0 },
+    // Never shortened: the food-use note is printed exactly as given (docs/cautions.md).
     { text: label.foodUseNote, style: scaled(styles.foodUse, k), gapBefore: 2 },
   ];
   return all.filter((block) => block.text !== '');
+}
+
+const smallestScale = 0.7;
+
+/**
+ * Lays out a label's words in a column: set smaller, down to 70%, until they fit; then, if they
+ * still do not, a long care note, then the materials, then the title are cut short with an
+ * ellipsis. The food-use note is never cut.
+ */
+function fit(doc: Doc, label: LabelData, width: number, room: number): Block[] {
+  const height = (b: Block) =>
+    b.gapBefore + Math.min(b.limit ?? Infinity, textHeight(doc, b.text, b.style, width));
+  const total = (list: Block[]) => list.reduce((sum, b) => sum + height(b), 0);
+  let k = 1;
+  let laid = blocks(label, k);
+  while (total(laid) > room && k > smallestScale) {
+    k = Math.max(smallestScale, k - 0.06);
+    laid = blocks(label, k);
+  }
+  const shortenable = laid
+    .filter((b) => b.shortenOrder !== undefined)
+    .sort((a, b) => a.shortenOrder! - b.shortenOrder!);
+  for (const block of shortenable) {
+    const over = total(laid) - room;
+    if (over <= 0) break;
+    const line = lineHeight(doc, block.style);
+    const full = textHeight(doc, block.text, block.style, width);
+    block.limit = Math.max(line, Math.floor((full - over) / line) * line);
+  }
+  return laid;
 }
 
 function drawLabel(doc: Doc, label: LabelData, data: LabelsData, x: number, y: number): void {
@@ -99,21 +138,16 @@ function drawLabel(doc: Doc, label: LabelData, data: LabelsData, x: number, y: n
     ellipsis: true,
   });
 
-  // Every word the maker gave is printed, the food-use note above all: rather than cut a text,
-  // the whole block is set smaller until it fits.
-  let k = 1;
-  let laid = blocks(label, k);
-  const total = (list: Block[]) =>
-    list.reduce((sum, b) => sum + b.gapBefore + textHeight(doc, b.text, b.style, columnWidth), 0);
-  while (total(laid) > room && k > 0.6) {
-    k -= 0.06;
-    laid = blocks(label, k);
-  }
   let top = y + padding + studioHeight;
-  for (const block of laid) {
+  for (const block of fit(doc, label, columnWidth, room)) {
     top += block.gapBefore;
-    writeText(doc, block.text, left, top, block.style, { width: columnWidth });
-    top += textHeight(doc, block.text, block.style, columnWidth);
+    const full = textHeight(doc, block.text, block.style, columnWidth);
+    const cut = block.limit !== undefined && block.limit < full;
+    writeText(doc, block.text, left, top, block.style, {
+      width: columnWidth,
+      ...(cut ? { height: block.limit, ellipsis: true } : {}),
+    });
+    top += cut ? block.limit! : full;
   }
 
   const priceY = bottom - priceHeight + 3;
