@@ -19,6 +19,7 @@ import {
 } from './layout/boxes';
 import { formatDate, formatMillimetres } from './layout/format';
 import { drawGradeGlyph } from './layout/glyphs';
+import { fillWith } from './layout/paint';
 import { fileIdentifier } from './layout/identity';
 import { createDocument, finishDocument } from './layout/page';
 import { datesBlock, place, sectionHeading, titleBlock } from './layout/sections';
@@ -116,7 +117,7 @@ function differences(piece: Piece): Box {
     return piece.arrival === null ? nothing : text('No differences since dispatch.', type.cellQuiet);
   }
   const dot = drawing(4, (doc, x, y) => {
-    doc.rect(x, y + 3.5, 3.2, 3.2).fillColor(colours.ink).fill();
+    fillWith(doc, colours.ink).rect(x, y + 3.5, 3.2, 3.2).fill();
   });
   return stack(
     [

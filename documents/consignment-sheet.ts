@@ -17,6 +17,7 @@ import { formatKilograms, kilograms } from './layout/format';
 import { drawCautionGlyph } from './layout/glyphs';
 import { fileIdentifier } from './layout/identity';
 import { moneyCell } from './layout/money';
+import { fillWith } from './layout/paint';
 import { createDocument, finishDocument } from './layout/page';
 import { datesBlock, partiesBlock, place, sectionHeading, titleBlock } from './layout/sections';
 import { signatureBlock } from './layout/signatures';
@@ -39,7 +40,7 @@ const pieceColumns: Column[] = [
 /** A bullet list of sentences. */
 function bullets(sentences: readonly string[]): Box {
   const dot = drawing(4, (doc, x, y) => {
-    doc.circle(x + 1.6, y + 5.2, 1.4).fillColor(colours.accent).fill();
+    fillWith(doc, colours.accent).circle(x + 1.6, y + 5.2, 1.4).fill();
   });
   return stack(
     sentences.map((sentence) => beside(dot, 6, text(sentence, type.body), 6)),

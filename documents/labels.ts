@@ -4,6 +4,7 @@ import { type LabelData, type LabelsData } from '@/shared/schemas/documents';
 import { drawCautionGlyph } from './layout/glyphs';
 import { fileIdentifier } from './layout/identity';
 import { createDocument, finishDocument, mm } from './layout/page';
+import { strokeWith } from './layout/paint';
 import { drawQrCode } from './layout/qr';
 import { colours, type TextStyle } from './layout/style';
 import { type Doc, lineHeight, textHeight, textWidth, writeText } from './layout/text';
@@ -114,7 +115,7 @@ function fit(doc: Doc, label: LabelData, width: number, room: number): Block[] {
 
 function drawLabel(doc: Doc, label: LabelData, data: LabelsData, x: number, y: number): void {
   const { width, height, padding, qrSize, qrBox } = labelSheet;
-  doc.rect(x, y, width, height).lineWidth(0.3).strokeColor(colours.rule).stroke();
+  strokeWith(doc, colours.rule, 0.3).rect(x, y, width, height).stroke();
 
   drawQrCode(doc, label.qrUrl, x + qrBox.dx, y + qrBox.dy, qrBox.size);
   const stockY = y + qrBox.dy + qrSize - 2;

@@ -1,5 +1,6 @@
 import PDFDocument from 'pdfkit';
 
+import { rule } from './paint';
 import { colours, type } from './style';
 import { type Doc, textWidth, writeText } from './text';
 
@@ -94,7 +95,7 @@ function drawChrome(doc: Doc, frame: PageFrame, n: number, of: number): void {
   const headerY = top >= roomyMargin ? top - mm(14) : top / 2 - 5;
   const footerY = bottom >= roomyMargin ? doc.page.height - bottom + mm(9) : doc.page.height - bottom / 2 - 4;
   const hairline = (y: number, weight: number, colour: string) =>
-    doc.moveTo(left, y).lineTo(left + width, y).lineWidth(weight).strokeColor(colour).stroke();
+    rule(doc, [left, y], [left + width, y], weight, colour);
   const atRight = (words: string, y: number) =>
     writeText(doc, words, left + width - textWidth(doc, words, style.text), y, style.text, {
       lineBreak: false,

@@ -3,6 +3,7 @@ import { type DocumentHeading, type DocumentParty } from '@/shared/schemas/docum
 import { type Box, columns, drawing, nothing, stack, text } from './boxes';
 import { formatDate } from './format';
 import { contentLeft, contentWidth, ensureSpace } from './page';
+import { rule } from './paint';
 import { colours, type } from './style';
 import { type Doc } from './text';
 
@@ -91,7 +92,7 @@ export function sectionHeading(doc: Doc, words: string, keepWith = 60): void {
   const heading = stack(
     [
       drawing(2, (d, x, y) => {
-        d.moveTo(x, y).lineTo(x + 28, y).lineWidth(2).strokeColor(colours.accent).stroke();
+        rule(d, [x, y], [x + 28, y], 2, colours.accent);
       }),
       text(words, type.section),
     ],

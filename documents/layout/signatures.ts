@@ -1,4 +1,5 @@
 import { type Box, columns, drawing, stack, text } from './boxes';
+import { rule } from './paint';
 import { caption } from './sections';
 import { colours, type } from './style';
 import { type Doc } from './text';
@@ -12,7 +13,7 @@ function line(what: string): Box {
     height: (doc: Doc, width: number) => writingSpace + 3 + under.height(doc, width),
     draw(doc: Doc, x: number, y: number, width: number) {
       const at = y + writingSpace;
-      doc.moveTo(x, at).lineTo(x + width, at).lineWidth(0.6).strokeColor(colours.ink).stroke();
+      rule(doc, [x, at], [x + width, at], 0.6, colours.ink);
       under.draw(doc, x, at + 3, width);
     },
   };
@@ -23,7 +24,7 @@ export function signatureBlock(who: string): Box {
   return stack(
     [
       drawing(1, (doc, x, y, width) => {
-        doc.moveTo(x, y).lineTo(x + width, y).lineWidth(0.4).strokeColor(colours.rule).stroke();
+        rule(doc, [x, y], [x + width, y], 0.4, colours.rule);
       }),
       text(who, type.bodyStrong),
       line('Signature'),

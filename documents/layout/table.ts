@@ -1,5 +1,6 @@
 import { type Box, text } from './boxes';
 import { contentBottom, contentLeft, contentTop } from './page';
+import { rule } from './paint';
 import { colours, type TextStyle, type } from './style';
 import { type Align, type Doc } from './text';
 
@@ -63,20 +64,15 @@ export function drawTable(doc: Doc, options: TableOptions): void {
     return { row, cells, below, height };
   };
 
-  const rule = (y: number, weight: number, colour: string) =>
-    doc
-      .moveTo(left, y)
-      .lineTo(left + width, y)
-      .lineWidth(weight)
-      .strokeColor(colour)
-      .stroke();
+  const across = (y: number, weight: number, colour: string) =>
+    rule(doc, [left, y], [left + width, y], weight, colour);
 
   const drawHeader = (y: number) => {
     // Headers sit on the rule under them, however many lines each takes.
     headerCells.forEach((cell, i) =>
       cell.draw(doc, xs[i]! + padX, y + headerHeight - padY - headerHeights[i]!, inner(i)),
     );
-    rule(y + headerHeight, 0.75, colours.ink);
+    across(y + headerHeight, 0.75, colours.ink);
     return y + headerHeight;
   };
 
@@ -106,7 +102,7 @@ export function drawTable(doc: Doc, options: TableOptions): void {
       y = start(y, firstCaption);
     }
     first = false;
-    if (row.total) rule(y, 0.75, colours.ink);
+    if (row.total) across(y, 0.75, colours.ink);
     row.cells.forEach((cell, i) => cell.draw(doc, xs[i]! + padX, y + padY, inner(i)));
     if (row.below && measured.below > 0) {
       const from = xs[row.below.from]!;
@@ -115,7 +111,7 @@ export function drawTable(doc: Doc, options: TableOptions): void {
       row.below.box.draw(doc, from + padX, y + padY + cellsHeight + padY, belowWidth);
     }
     y += measured.height;
-    if (!row.total) rule(y, 0.4, colours.rule);
+    if (!row.total) across(y, 0.4, colours.rule);
   });
   if (first) y = start(y, firstCaption);
   doc.x = left;

@@ -1,4 +1,5 @@
 import { fonts, printable } from './fonts';
+import { fillWith } from './paint';
 import { colours, type TextStyle } from './style';
 
 export type Doc = PDFKit.PDFDocument;
@@ -38,7 +39,7 @@ export function textWidth(doc: Doc, text: string, style: TextStyle): number {
 }
 
 /** Advance widths of single characters at 1 pt, by font and features: a property of the font. */
-const advances = new Map<string, number>();
+const advances = new Map<string, Map<string, number>>();
 
 /**
  * An upper bound of a one-line text's width from its characters' own advances, with room for
@@ -46,19 +47,23 @@ const advances = new Map<string, number>();
  * caches shaped words only without features), so a cell that plainly fits is not shaped twice.
  */
 function widthBound(doc: Doc, text: string, style: TextStyle): number {
+  const key = style.figures ? `${style.font}|tnum` : style.font;
+  let known = advances.get(key);
+  if (known === undefined) {
+    known = new Map();
+    advances.set(key, known);
+  }
   let sum = 0;
-  const features = style.figures ? tnum : undefined;
   for (const char of text) {
-    const key = `${style.font}|${style.figures ? 1 : 0}|${char}`;
-    let advance = advances.get(key);
+    let advance = known.get(char);
     if (advance === undefined) {
       doc.fontSize(1);
-      advance = doc.widthOfString(char, { features });
-      advances.set(key, advance);
+      advance = doc.widthOfString(char, { features: style.figures ? tnum : undefined });
+      doc.fontSize(style.size);
+      known.set(char, advance);
     }
     sum += advance;
   }
-  doc.fontSize(style.size);
   return sum * style.size * 1.03 + (style.characterSpacing ?? 0) * text.length;
 }
 
@@ -97,7 +102,7 @@ export function writeFigures(
   if (text === '') return;
   const shown = printable(text);
   if (fitsOnOneLine(doc, shown, style, width)) {
-    doc.fillColor(style.colour ?? colours.ink);
+    fillWith(doc, style.colour ?? colours.ink);
     doc.text(shown, x, y, options(style, width, { align, lineBreak: false }));
     return;
   }
@@ -118,6 +123,6 @@ export function writeText(
   extra: PDFKit.Mixins.TextOptions = {},
 ): void {
   if (text === '') return;
-  useStyle(doc, style).fillColor(style.colour ?? colours.ink);
+  fillWith(useStyle(doc, style), style.colour ?? colours.ink);
   doc.text(printable(text), x, y, options(style, extra.width, extra));
 }
