@@ -19,11 +19,11 @@ import {
 } from './layout/boxes';
 import { formatDate, formatMillimetres } from './layout/format';
 import { drawGradeGlyph } from './layout/glyphs';
-import { fillWith } from './layout/paint';
 import { fileIdentifier } from './layout/identity';
 import { createDocument, finishDocument } from './layout/page';
+import { fillWith } from './layout/paint';
 import { datesBlock, place, sectionHeading, titleBlock } from './layout/sections';
-import { colours, type } from './layout/style';
+import { colours, type TextStyle, type } from './layout/style';
 import { type Column, drawTable, type TableRow } from './layout/table';
 
 const documentName = 'Condition report';
@@ -39,13 +39,13 @@ const stageHeading: Record<DocumentCheck['stage'], string> = {
 };
 
 /** A finding's kind in words: 'hairline-crack' → "Hairline crack". */
-export function kindInWords(kind: DocumentFinding['kind']): string {
+function kindInWords(kind: DocumentFinding['kind']): string {
   const words = kind.replaceAll('-', ' ');
   return words.charAt(0).toUpperCase() + words.slice(1);
 }
 
 /** A grade's shape followed by words. */
-function graded(grade: ConditionGrade, words: string, style = type.cellStrong): Box {
+function graded(grade: ConditionGrade, words: string, style: TextStyle = type.cellStrong): Box {
   const glyph = drawing(9, (doc, x, y) => drawGradeGlyph(doc, grade, x, y + 1.5, 8));
   return beside(glyph, 9, text(words, style), 5);
 }
@@ -86,7 +86,9 @@ function finding(f: DocumentFinding | undefined, locale: string): Box {
 }
 
 function notes(check: DocumentCheck | null): Box {
-  return check?.notes ? stack([text('Notes', type.cellStrong), text(check.notes, type.cellQuiet)], 1) : nothing;
+  return check?.notes
+    ? stack([text('Notes', type.cellStrong), text(check.notes, type.cellQuiet)], 1)
+    : nothing;
 }
 
 /** The legend of grades and the method the overall grade follows. */
@@ -114,10 +116,14 @@ function method(): Box {
 
 function differences(piece: Piece): Box {
   if (piece.differences.length === 0) {
-    return piece.arrival === null ? nothing : text('No differences since dispatch.', type.cellQuiet);
+    return piece.arrival === null
+      ? nothing
+      : text('No differences since dispatch.', type.cellQuiet);
   }
   const dot = drawing(4, (doc, x, y) => {
-    fillWith(doc, colours.ink).rect(x, y + 3.5, 3.2, 3.2).fill();
+    fillWith(doc, colours.ink)
+      .rect(x, y + 3.5, 3.2, 3.2)
+      .fill();
   });
   return stack(
     [
@@ -138,10 +144,16 @@ function pieceRows(piece: Piece, locale: string): TableRow[] {
   const { dispatch, arrival } = piece;
   const photos = piece.photos.slice(0, 2).map((photo) => picture(photo, photoSize));
   const findingRows = Math.max(dispatch?.findings.length ?? 0, arrival?.findings.length ?? 0);
-  const rows: TableRow[] = [{ cells: [nothing, summary(dispatch, locale), summary(arrival, locale)] }];
+  const rows: TableRow[] = [
+    { cells: [nothing, summary(dispatch, locale), summary(arrival, locale)] },
+  ];
   for (let i = 0; i < findingRows; i += 1) {
     rows.push({
-      cells: [nothing, finding(dispatch?.findings[i], locale), finding(arrival?.findings[i], locale)],
+      cells: [
+        nothing,
+        finding(dispatch?.findings[i], locale),
+        finding(arrival?.findings[i], locale),
+      ],
     });
   }
   if (dispatch?.notes || arrival?.notes) {
@@ -153,7 +165,11 @@ function pieceRows(piece: Piece, locale: string): TableRow[] {
   });
   const after = differences(piece);
   if (after !== nothing) {
-    rows.push({ cells: [nothing, nothing, nothing], below: { from: 1, box: after }, keepWithPrevious: true });
+    rows.push({
+      cells: [nothing, nothing, nothing],
+      below: { from: 1, box: after },
+      keepWithPrevious: true,
+    });
   }
   return rows;
 }

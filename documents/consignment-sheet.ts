@@ -17,8 +17,8 @@ import { formatKilograms, kilograms } from './layout/format';
 import { drawCautionGlyph } from './layout/glyphs';
 import { fileIdentifier } from './layout/identity';
 import { moneyCell } from './layout/money';
-import { fillWith } from './layout/paint';
 import { createDocument, finishDocument } from './layout/page';
+import { fillWith } from './layout/paint';
 import { datesBlock, partiesBlock, place, sectionHeading, titleBlock } from './layout/sections';
 import { signatureBlock } from './layout/signatures';
 import { colours, type } from './layout/style';
@@ -40,7 +40,9 @@ const pieceColumns: Column[] = [
 /** A bullet list of sentences. */
 function bullets(sentences: readonly string[]): Box {
   const dot = drawing(4, (doc, x, y) => {
-    fillWith(doc, colours.accent).circle(x + 1.6, y + 5.2, 1.4).fill();
+    fillWith(doc, colours.accent)
+      .circle(x + 1.6, y + 5.2, 1.4)
+      .fill();
   });
   return stack(
     sentences.map((sentence) => beside(dot, 6, text(sentence, type.body), 6)),
@@ -61,7 +63,10 @@ function pieceRow(line: SheetLine, data: ConsignmentSheetData): TableRow {
       line.thumbnail ? picture(line.thumbnail, thumbnailSize) : nothing,
       text(line.stockNumber, type.cellFigure),
       stack(
-        [text(line.title, type.cellStrong), line.materials ? text(line.materials, type.cellQuiet) : nothing],
+        [
+          text(line.title, type.cellStrong),
+          line.materials ? text(line.materials, type.cellQuiet) : nothing,
+        ],
         1,
       ),
       text(line.dimensions.replace(/\s*mm$/, '') || '—', type.cellFigure, 'right'),
@@ -127,7 +132,9 @@ export async function renderConsignmentSheet(data: ConsignmentSheetData): Promis
 
   const count = data.lines.length;
   sectionHeading(doc, `Pieces (${count})`, 90);
-  const heavyCount = data.lines.filter((l) => l.weightG !== null && l.weightG > data.heavyWeightG).length;
+  const heavyCount = data.lines.filter(
+    (l) => l.weightG !== null && l.weightG > data.heavyWeightG,
+  ).length;
   drawTable(doc, {
     columns: pieceColumns,
     rows: [
@@ -166,7 +173,10 @@ export async function renderConsignmentSheet(data: ConsignmentSheetData): Promis
   place(
     doc,
     columns(
-      [signatureBlock('For the studio'), signatureBlock('For the venue, received in the condition described')],
+      [
+        signatureBlock('For the studio'),
+        signatureBlock('For the venue, received in the condition described'),
+      ],
       28,
     ),
   );

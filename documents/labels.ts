@@ -120,9 +120,16 @@ function drawLabel(doc: Doc, label: LabelData, data: LabelsData, x: number, y: n
   drawQrCode(doc, label.qrUrl, x + qrBox.dx, y + qrBox.dy, qrBox.size);
   const stockY = y + qrBox.dy + qrSize - 2;
   const stockWidth = textWidth(doc, label.stockNumber, styles.stock);
-  writeText(doc, label.stockNumber, x + qrBox.dx + (qrSize - stockWidth) / 2, stockY, styles.stock, {
-    lineBreak: false,
-  });
+  writeText(
+    doc,
+    label.stockNumber,
+    x + qrBox.dx + (qrSize - stockWidth) / 2,
+    stockY,
+    styles.stock,
+    {
+      lineBreak: false,
+    },
+  );
 
   const left = x + padding;
   const textRight = x + qrBox.dx - 2;

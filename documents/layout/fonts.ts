@@ -4,13 +4,11 @@
 /** Literata (headings) and Atkinson Hyperlegible Next (text), the product's own two faces. */
 export const fonts = {
   heading: require.resolve('@expo-google-fonts/literata/500Medium/Literata_500Medium.ttf'),
-  headingStrong: require.resolve('@expo-google-fonts/literata/600SemiBold/Literata_600SemiBold.ttf'),
-  text: require.resolve(
-    '@expo-google-fonts/atkinson-hyperlegible-next/400Regular/AtkinsonHyperlegibleNext_400Regular.ttf',
-  ),
-  textStrong: require.resolve(
-    '@expo-google-fonts/atkinson-hyperlegible-next/600SemiBold/AtkinsonHyperlegibleNext_600SemiBold.ttf',
-  ),
+  headingStrong:
+    require.resolve('@expo-google-fonts/literata/600SemiBold/Literata_600SemiBold.ttf'),
+  text: require.resolve('@expo-google-fonts/atkinson-hyperlegible-next/400Regular/AtkinsonHyperlegibleNext_400Regular.ttf'),
+  textStrong:
+    require.resolve('@expo-google-fonts/atkinson-hyperlegible-next/600SemiBold/AtkinsonHyperlegibleNext_600SemiBold.ttf'),
 } as const;
 
 export type FontName = keyof typeof fonts;

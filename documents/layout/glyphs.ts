@@ -16,7 +16,11 @@ export function drawGradeGlyph(
   size: number,
 ): void {
   const c = size / 2;
-  doc.save().lineWidth(Math.max(0.8, size / 9)).strokeColor(colours.ink).fillColor(colours.ink);
+  doc
+    .save()
+    .lineWidth(Math.max(0.8, size / 9))
+    .strokeColor(colours.ink)
+    .fillColor(colours.ink);
   const triangle = () =>
     doc
       .moveTo(x + c, y + size * 0.06)

@@ -93,7 +93,8 @@ function drawChrome(doc: Doc, frame: PageFrame, n: number, of: number): void {
   const { left, right, top, bottom } = doc.page.margins;
   const width = doc.page.width - left - right;
   const headerY = top >= roomyMargin ? top - mm(14) : top / 2 - 5;
-  const footerY = bottom >= roomyMargin ? doc.page.height - bottom + mm(9) : doc.page.height - bottom / 2 - 4;
+  const footerY =
+    bottom >= roomyMargin ? doc.page.height - bottom + mm(9) : doc.page.height - bottom / 2 - 4;
   const hairline = (y: number, weight: number, colour: string) =>
     rule(doc, [left, y], [left + width, y], weight, colour);
   const atRight = (words: string, y: number) =>

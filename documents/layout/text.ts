@@ -8,7 +8,7 @@ export type Align = 'left' | 'right' | 'center';
 const tnum: PDFKit.Mixins.OpenTypeFeatures[] = ['tnum'];
 
 /** Sets the font and size of a style: enough to measure. */
-export function useStyle(doc: Doc, style: TextStyle): Doc {
+export function setFont(doc: Doc, style: TextStyle): Doc {
   return doc.font(fonts[style.font]).fontSize(style.size);
 }
 
@@ -28,13 +28,13 @@ function options(
 
 /** The height of one line in a style, its line gap included. */
 export function lineHeight(doc: Doc, style: TextStyle): number {
-  useStyle(doc, style);
+  setFont(doc, style);
   return doc.currentLineHeight(true) + (style.lineGap ?? 0);
 }
 
 /** The width of a text on one line in a style. */
 export function textWidth(doc: Doc, text: string, style: TextStyle): number {
-  useStyle(doc, style);
+  setFont(doc, style);
   return doc.widthOfString(printable(text), options(style, undefined));
 }
 
@@ -70,7 +70,7 @@ function widthBound(doc: Doc, text: string, style: TextStyle): number {
 /** Whether a text certainly fits on one line of a width. */
 function fitsOnOneLine(doc: Doc, text: string, style: TextStyle, width: number): boolean {
   if (text.includes('\n')) return false;
-  useStyle(doc, style);
+  setFont(doc, style);
   return widthBound(doc, text, style) <= width;
 }
 
@@ -82,7 +82,7 @@ export function textHeight(doc: Doc, text: string, style: TextStyle, width: numb
   if (text === '') return 0;
   const shown = printable(text);
   if (fitsOnOneLine(doc, shown, style, width)) return lineHeight(doc, style);
-  useStyle(doc, style);
+  setFont(doc, style);
   return doc.heightOfString(shown, options(style, width));
 }
 
@@ -123,6 +123,6 @@ export function writeText(
   extra: PDFKit.Mixins.TextOptions = {},
 ): void {
   if (text === '') return;
-  fillWith(useStyle(doc, style), style.colour ?? colours.ink);
+  fillWith(setFont(doc, style), style.colour ?? colours.ink);
   doc.text(printable(text), x, y, options(style, extra.width, extra));
 }

@@ -29,7 +29,9 @@ export function bareSheet(data: ConsignmentSheetData): Promise<Buffer> {
   });
   const chunks: Buffer[] = [];
   doc.on('data', (chunk: Buffer) => chunks.push(chunk));
-  const done = new Promise<Buffer>((resolve) => doc.on('end', () => resolve(Buffer.concat(chunks))));
+  const done = new Promise<Buffer>((resolve) =>
+    doc.on('end', () => resolve(Buffer.concat(chunks))),
+  );
   const { locale } = data;
   const tnum: PDFKit.Mixins.OpenTypeFeatures[] = ['tnum'];
   const line = (words: string, font: string, size: number, x: number, y: number, width = 480) =>
@@ -38,7 +40,13 @@ export function bareSheet(data: ConsignmentSheetData): Promise<Buffer> {
   let y = 85;
   line('Consignment sheet', fonts.heading, 22, 57, y);
   line(data.title, fonts.heading, 13, 57, (y += 28));
-  line(`Reference ${data.reference} · issued ${formatDate(data.issuedOn, locale)}`, fonts.text, 7.5, 57, (y += 18));
+  line(
+    `Reference ${data.reference} · issued ${formatDate(data.issuedOn, locale)}`,
+    fonts.text,
+    7.5,
+    57,
+    (y += 18),
+  );
   y += 24;
   for (const [i, party] of [data.studio, data.venue].entries()) {
     const x = 57 + i * 250;
@@ -52,7 +60,14 @@ export function bareSheet(data: ConsignmentSheetData): Promise<Buffer> {
   y += 110;
   const dates = data.dates;
   [dates.dispatch, dates.opening, dates.closing, dates.returnDue].forEach((date, i) => {
-    line(['DISPATCH', 'OPENING', 'CLOSING', 'RETURN DUE'][i]!, fonts.textStrong, 7.5, 57 + i * 124, y, 110);
+    line(
+      ['DISPATCH', 'OPENING', 'CLOSING', 'RETURN DUE'][i]!,
+      fonts.textStrong,
+      7.5,
+      57 + i * 124,
+      y,
+      110,
+    );
     line(date ? formatDate(date, locale) : '—', fonts.text, 9.5, 57 + i * 124, y + 11, 110);
   });
   y += 40;
@@ -86,14 +101,20 @@ export function bareSheet(data: ConsignmentSheetData): Promise<Buffer> {
     if (piece.thumbnail) doc.image(Buffer.from(piece.thumbnail), xs[0]! + 4, y, { fit: [34, 34] });
     cell(piece.stockNumber, fonts.text, 1, y, true);
     cell(piece.title, fonts.textStrong, 2, y);
-    doc.font(fonts.text).fontSize(7.5).text(piece.materials, xs[2]! + 4, y + 12, { width: 140 });
+    doc
+      .font(fonts.text)
+      .fontSize(7.5)
+      .text(piece.materials, xs[2]! + 4, y + 12, { width: 140 });
     cell(piece.dimensions.replace(/\s*mm$/, ''), fonts.text, 3, y, true);
     cell(piece.weightG === null ? '—' : kilograms(piece.weightG, locale), fonts.text, 4, y, true);
     cell(formatMoney(piece.listPrice, locale), fonts.text, 5, y, true);
     cell(formatMoney(piece.insuranceValue, locale), fonts.text, 6, y, true);
     if (piece.weightG !== null && piece.weightG > data.heavyWeightG) {
       const words = `Heavy: ${formatKilograms(piece.weightG, locale)} — lift with two people or a trolley (UK HSE guideline weights)`;
-      doc.font(fonts.textStrong).fontSize(8.5).text(words, xs[2]! + 17, y + 40, { width: 320 });
+      doc
+        .font(fonts.textStrong)
+        .fontSize(8.5)
+        .text(words, xs[2]! + 17, y + 40, { width: 320 });
       y += 16;
     }
     y += 48;
@@ -103,7 +124,10 @@ export function bareSheet(data: ConsignmentSheetData): Promise<Buffer> {
   cell(formatMoney(data.totals.insuranceValue, locale), fonts.textStrong, 6, y, true);
   doc.addPage();
   line('Signatures', fonts.headingStrong, 12, 57, 85);
-  for (const [i, who] of ['For the studio', 'For the venue, received in the condition described'].entries()) {
+  for (const [i, who] of [
+    'For the studio',
+    'For the venue, received in the condition described',
+  ].entries()) {
     line(who, fonts.textStrong, 9.5, 57 + i * 250, 110, 230);
     for (const [j, caption] of ['SIGNATURE', 'NAME IN CAPITALS', 'DATE'].entries()) {
       line(caption, fonts.textStrong, 7.5, 57 + i * 250, 150 + j * 36, 230);

@@ -24,9 +24,9 @@ describe('renderConditionReport', () => {
     expect(headings).toHaveLength(3);
     const grades = all.find((line) => line.includes('Overall: sound'));
     expect(grades).toMatch(/Overall: sound\s+Overall: marked/);
-    expect(all.some((line) => /on 13 Mar 2026\s+Examined by Ines Hartley on 16 Mar 2026/.test(line))).toBe(
-      true,
-    );
+    expect(
+      all.some((line) => /on 13 Mar 2026\s+Examined by Ines Hartley on 16 Mar 2026/.test(line)),
+    ).toBe(true);
   });
 
   it('gives each check its examiner, date, overall grade in words and its findings', () => {

@@ -67,7 +67,10 @@ describe('renderConsignmentSheet', () => {
   it('refuses totals that are not the sum of the lines, naming both figures', async () => {
     const wrong = {
       ...data,
-      totals: { ...data.totals, listPrice: { amount: data.totals.listPrice.amount + 1, currency: 'GBP' } },
+      totals: {
+        ...data.totals,
+        listPrice: { amount: data.totals.listPrice.amount + 1, currency: 'GBP' },
+      },
     };
     await expect(renderConsignmentSheet(wrong)).rejects.toThrow(
       `The sheet's list price total ${formatMoney(wrong.totals.listPrice)} is not the sum of its lines, ${formatMoney(data.totals.listPrice)}.`,

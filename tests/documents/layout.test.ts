@@ -1,4 +1,5 @@
 import { execFileSync } from 'node:child_process';
+import fs from 'node:fs';
 import path from 'node:path';
 
 import * as fontkit from 'fontkit';
@@ -48,7 +49,7 @@ describe('formatKilograms', () => {
 });
 
 describe('printable', () => {
-  const text = fontkit.openSync(fonts.text) as fontkit.Font;
+  const text = fontkit.create(fs.readFileSync(fonts.text)) as fontkit.Font;
   const missing = (words: string) =>
     [...words].filter((char) => !text.hasGlyphForCodePoint(char.codePointAt(0)!));
 

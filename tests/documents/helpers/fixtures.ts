@@ -44,11 +44,7 @@ export async function potPhoto(glaze: string, ground: string, side = 160): Promi
     <ellipse cx="50" cy="88" rx="30" ry="4" fill="#00000022"/>
     <path d="M38 18 h24 v6 c14 6 20 22 16 40 c-3 14 -10 22 -18 24 h-20 c-8 -2 -15 -10 -18 -24 c-4 -18 2 -34 16 -40 z" fill="${glaze}"/>
   </svg>`;
-  return new Uint8Array(
-    await sharp(Buffer.from(svg))
-      .jpeg({ quality: 80 })
-      .toBuffer(),
-  );
+  return new Uint8Array(await sharp(Buffer.from(svg)).jpeg({ quality: 80 }).toBuffer());
 }
 
 let photoCache: Promise<Uint8Array[]> | undefined;
@@ -94,7 +90,12 @@ export function heading(): DocumentHeading {
   };
 }
 
-export type FixturePiece = Omit<SheetLine, 'thumbnail'> & { glaze: number; heavy: boolean };
+export type FixturePiece = {
+  line: Omit<SheetLine, 'thumbnail'>;
+  /** Which of the glaze photographs shows it. */
+  glaze: number;
+  heavy: boolean;
+};
 
 /** The n-th piece of the invented catalogue; every fifth is a heavy garden piece or store jar. */
 export function piece(i: number): FixturePiece {
@@ -104,7 +105,7 @@ export function piece(i: number): FixturePiece {
   const weightG = i % 13 === 11 ? null : baseWeight + ((i * 37) % 90);
   const price = 4_500 + ((i * 7_919) % 180_000);
   const roundedPrice = price - (price % 500);
-  return {
+  const line = {
     stockNumber: `HC-${String(2601 + i).padStart(4, '0')}`,
     title: `${form}, ${glazes[glaze]![0]}${i % 9 === 4 ? ' with iron-spot rim and combed shoulder' : ''}`,
     materials: `${clay}, ${glazes[glaze]![0]} glaze, ${i % 2 === 0 ? '1280 °C reduction' : '1260 °C oxidation'}`,
@@ -112,16 +113,18 @@ export function piece(i: number): FixturePiece {
     weightG,
     listPrice: { amount: roundedPrice, currency: 'GBP' },
     // The maker's net at 40% commission, the usual insurance basis (docs/money-rules.md).
-    insuranceValue: { amount: roundedPrice - Math.round((roundedPrice * 4000) / 10000), currency: 'GBP' },
-    glaze,
-    heavy: weightG !== null && weightG > 16_000,
+    insuranceValue: {
+      amount: roundedPrice - Math.round((roundedPrice * 4000) / 10000),
+      currency: 'GBP',
+    },
   };
+  return { line, glaze, heavy: weightG !== null && weightG > 16_000 };
 }
 
 export async function sheetData(count: number): Promise<ConsignmentSheetData> {
   const photos = await glazePhotos();
   const lines: SheetLine[] = Array.from({ length: count }, (_, i) => {
-    const { glaze, heavy: _heavy, ...line } = piece(i);
+    const { line, glaze } = piece(i);
     return { ...line, thumbnail: i % 8 === 7 ? null : photos[glaze]! };
   });
   return {
@@ -277,20 +280,20 @@ export function labelsData(count: number): LabelsData {
     issuedOn: '2026-03-14',
     locale: 'en-GB',
     labels: Array.from({ length: count }, (_, i) => {
-      const p = piece(i);
+      const { line, heavy } = piece(i);
       return {
-        stockNumber: p.stockNumber,
-        title: p.title,
-        materials: p.materials,
-        dimensions: p.dimensions,
-        price: p.listPrice,
+        stockNumber: line.stockNumber,
+        title: line.title,
+        materials: line.materials,
+        dimensions: line.dimensions,
+        price: line.listPrice,
         careNote: i % 4 === 3 ? null : 'Wash by hand; not for the microwave.',
         foodUseNote:
           i % 3 === 0
             ? 'Food-safe glaze on the inside, as declared by the maker.'
             : 'Decorative — not for food use.',
-        heavy: p.heavy,
-        qrUrl: `https://saggar.example/venue/pieces/${p.stockNumber}`,
+        heavy,
+        qrUrl: `https://saggar.example/venue/pieces/${line.stockNumber}`,
       };
     }),
   };

@@ -51,7 +51,18 @@ export function pdfPagePng(pdf: Buffer, page: number, dpi: number): Buffer {
     const file = path.join(dir, 'in.pdf');
     fs.writeFileSync(file, pdf);
     const prefix = path.join(dir, 'page');
-    execFileSync('pdftoppm', ['-r', String(dpi), '-f', String(page), '-l', String(page), '-png', '-singlefile', file, prefix]);
+    execFileSync('pdftoppm', [
+      '-r',
+      String(dpi),
+      '-f',
+      String(page),
+      '-l',
+      String(page),
+      '-png',
+      '-singlefile',
+      file,
+      prefix,
+    ]);
     return fs.readFileSync(`${prefix}.png`);
   } finally {
     fs.rmSync(dir, { recursive: true, force: true });
