@@ -27,15 +27,21 @@ import { type Column, drawTable, type TableRow } from './layout/table';
 const documentName = 'Consignment sheet';
 const thumbnailSize = 34;
 
-const pieceColumns: Column[] = [
-  { header: 'Photo', width: 42 },
-  { header: 'Stock no.', width: 60 },
-  { header: 'Title and materials', width: 140 },
-  { header: 'Dimensions (mm)', width: 84, align: 'right' },
-  { header: 'Weight (kg)', width: 34, align: 'right' },
-  { header: 'List price', width: 60, align: 'right' },
-  { header: 'Insured at', width: 62, align: 'right' },
-];
+const photoWidth = 42;
+const titleWidth = 140;
+
+/** The pieces' columns; a sheet without a single photograph gives the room to the titles. */
+function pieceColumns(withPhotos: boolean): Column[] {
+  return [
+    ...(withPhotos ? [{ header: 'Photo', width: photoWidth }] : []),
+    { header: 'Stock no.', width: 60 },
+    { header: 'Title and materials', width: titleWidth + (withPhotos ? 0 : photoWidth) },
+    { header: 'Dimensions (mm)', width: 84, align: 'right' },
+    { header: 'Weight (kg)', width: 34, align: 'right' },
+    { header: 'List price', width: 60, align: 'right' },
+    { header: 'Insured at', width: 62, align: 'right' },
+  ];
+}
 
 /** A bullet list of sentences. */
 function bullets(sentences: readonly string[]): Box {
@@ -55,12 +61,13 @@ function caution(words: string): Box {
   return beside(glyph, 9, text(words, type.cellStrong), 4);
 }
 
-function pieceRow(line: SheetLine, data: ConsignmentSheetData): TableRow {
+function pieceRow(line: SheetLine, data: ConsignmentSheetData, withPhotos: boolean): TableRow {
   const { locale } = data;
   const heavy = line.weightG !== null && line.weightG > data.heavyWeightG;
+  const photo = line.thumbnail ? picture(line.thumbnail, thumbnailSize) : nothing;
   return {
     cells: [
-      line.thumbnail ? picture(line.thumbnail, thumbnailSize) : nothing,
+      ...(withPhotos ? [photo] : []),
       text(line.stockNumber, type.cellFigure),
       stack(
         [
@@ -76,7 +83,7 @@ function pieceRow(line: SheetLine, data: ConsignmentSheetData): TableRow {
     ],
     below: heavy
       ? {
-          from: 2,
+          from: withPhotos ? 2 : 1,
           box: caution(
             `Heavy: ${formatKilograms(line.weightG!, locale)} — lift with two people or a trolley (UK HSE guideline weights)`,
           ),
@@ -135,14 +142,16 @@ export async function renderConsignmentSheet(data: ConsignmentSheetData): Promis
   const heavyCount = data.lines.filter(
     (l) => l.weightG !== null && l.weightG > data.heavyWeightG,
   ).length;
+  const withPhotos = data.lines.some((line) => line.thumbnail !== null);
   drawTable(doc, {
-    columns: pieceColumns,
+    columns: pieceColumns(withPhotos),
     rows: [
-      ...data.lines.map((line) => pieceRow(line, data)),
+      ...data.lines.map((line) => pieceRow(line, data, withPhotos)),
       {
         total: true,
+        keepWithPrevious: true,
         cells: [
-          nothing,
+          ...(withPhotos ? [nothing] : []),
           nothing,
           text(`Total, ${count} ${count === 1 ? 'piece' : 'pieces'}`, type.cellStrong),
           nothing,

@@ -156,6 +156,18 @@ describe('renderConsignmentSheet', () => {
     expect(longPages[1]).toContain(`Page 2 of ${count}`);
   });
 
+  it('never leaves the totals alone on a page, and drops the photo column when no piece has one', async () => {
+    const long = await sheetData(200);
+    const longPages = pdfPages(await renderConsignmentSheet(long));
+    const last = longPages.find((page) => page.includes('Total, 200 pieces'))!;
+    expect(last.split('\n').some((line) => stockLine.test(line))).toBe(true);
+
+    const bare = { ...data, lines: data.lines.map((line) => ({ ...line, thumbnail: null })) };
+    const barePages = pdfPages(await renderConsignmentSheet(bare));
+    expect(barePages.join('\n')).toMatch(/^\s*Stock no\.\s+Title and materials/m);
+    expect(pages.join('\n')).toMatch(/^\s*Photo\s+Stock no\.\s+Title and materials/m);
+  });
+
   it('gives the same bytes for the same data, and another file identifier for other data', async () => {
     const again = await renderConsignmentSheet(await sheetData(24));
     expect(again.equals(pdf)).toBe(true);
