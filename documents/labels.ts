@@ -6,7 +6,7 @@ import { fileIdentifier } from './layout/identity';
 import { createDocument, finishDocument, mm } from './layout/page';
 import { strokeWith } from './layout/paint';
 import { drawQrCode } from './layout/qr';
-import { colours, type TextStyle } from './layout/style';
+import { colours, type TextStyle, textStyles } from './layout/style';
 import { type Doc, lineHeight, textHeight, textWidth, writeText } from './layout/text';
 
 const documentName = 'Shelf labels';
@@ -48,7 +48,7 @@ export const labelSheet = (() => {
 
 const scaled = (style: TextStyle, k: number): TextStyle => ({ ...style, size: style.size * k });
 
-const styles = {
+const styles = textStyles({
   studio: { font: 'textStrong', size: 6.5, colour: colours.quiet, characterSpacing: 0.4 },
   title: { font: 'headingStrong', size: 12, lineGap: 0.5 },
   detail: { font: 'text', size: 7.5, colour: colours.quiet, lineGap: 0.5 },
@@ -58,7 +58,7 @@ const styles = {
   heavy: { font: 'textStrong', size: 7.5 },
   price: { font: 'textStrong', size: 17, figures: true },
   stock: { font: 'text', size: 7.5, figures: true },
-} as const satisfies Record<string, TextStyle>;
+});
 
 type Block = {
   text: string;

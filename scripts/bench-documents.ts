@@ -28,6 +28,7 @@ async function main() {
   const sheet = await sheetData(PIECES);
   const labels = labelsData(PIECES);
 
+  // The first labels of the process: pdfkit and the documents' code are cold.
   const firstLabels = await time(() => renderLabels(labels));
   for (let i = 0; i < WARM_UP; i += 1) {
     await renderConsignmentSheet(sheet);

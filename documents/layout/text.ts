@@ -1,6 +1,6 @@
 import { fonts, printable } from './fonts';
 import { fillWith } from './paint';
-import { colours, type TextStyle } from './style';
+import { type TextStyle } from './style';
 
 export type Doc = PDFKit.PDFDocument;
 export type Align = 'left' | 'right' | 'center';
@@ -19,8 +19,8 @@ function options(
 ): PDFKit.Mixins.TextOptions {
   return {
     width,
-    lineGap: style.lineGap ?? 0,
-    characterSpacing: style.characterSpacing ?? 0,
+    lineGap: style.lineGap,
+    characterSpacing: style.characterSpacing,
     features: style.figures ? tnum : undefined,
     ...extra,
   };
@@ -29,7 +29,7 @@ function options(
 /** The height of one line in a style, its line gap included. */
 export function lineHeight(doc: Doc, style: TextStyle): number {
   setFont(doc, style);
-  return doc.currentLineHeight(true) + (style.lineGap ?? 0);
+  return doc.currentLineHeight(true) + style.lineGap;
 }
 
 /** The width of a text on one line in a style. */
@@ -64,7 +64,7 @@ function widthBound(doc: Doc, text: string, style: TextStyle): number {
     }
     sum += advance;
   }
-  return sum * style.size * 1.03 + (style.characterSpacing ?? 0) * text.length;
+  return sum * style.size * 1.03 + style.characterSpacing * text.length;
 }
 
 /** Whether a text certainly fits on one line of a width. */
@@ -102,7 +102,7 @@ export function writeFigures(
   if (text === '') return;
   const shown = printable(text);
   if (fitsOnOneLine(doc, shown, style, width)) {
-    fillWith(doc, style.colour ?? colours.ink);
+    fillWith(doc, style.colour);
     doc.text(shown, x, y, options(style, width, { align, lineBreak: false }));
     return;
   }
@@ -123,6 +123,6 @@ export function writeText(
   extra: PDFKit.Mixins.TextOptions = {},
 ): void {
   if (text === '') return;
-  fillWith(setFont(doc, style), style.colour ?? colours.ink);
+  fillWith(setFont(doc, style), style.colour);
   doc.text(printable(text), x, y, options(style, extra.width, extra));
 }
