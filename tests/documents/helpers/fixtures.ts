@@ -38,13 +38,21 @@ const forms = [
 const clays = ['Porcelain', 'Stoneware', 'Buff stoneware', 'Crank'] as const;
 
 /** A small square picture of a pot: a rounded silhouette in a glaze colour on a pale ground. */
-export async function potPhoto(glaze: string, ground: string, side = 160): Promise<Uint8Array> {
+export async function potPhoto(
+  glaze: string,
+  ground: string,
+  side = 160,
+  format: 'jpeg' | 'png' = 'jpeg',
+): Promise<Uint8Array> {
   const svg = `<svg xmlns="http://www.w3.org/2000/svg" width="${side}" height="${side}" viewBox="0 0 100 100">
     <rect width="100" height="100" fill="${ground}"/>
     <ellipse cx="50" cy="88" rx="30" ry="4" fill="#00000022"/>
     <path d="M38 18 h24 v6 c14 6 20 22 16 40 c-3 14 -10 22 -18 24 h-20 c-8 -2 -15 -10 -18 -24 c-4 -18 2 -34 16 -40 z" fill="${glaze}"/>
   </svg>`;
-  return new Uint8Array(await sharp(Buffer.from(svg)).jpeg({ quality: 80 }).toBuffer());
+  const picture = sharp(Buffer.from(svg));
+  return new Uint8Array(
+    await (format === 'png' ? picture.png() : picture.jpeg({ quality: 80 })).toBuffer(),
+  );
 }
 
 let photoCache: Promise<Uint8Array[]> | undefined;
@@ -148,7 +156,8 @@ export async function sheetData(count: number): Promise<ConsignmentSheetData> {
 
 export async function conditionData(): Promise<ConditionReportData> {
   const photos = await glazePhotos();
-  const chipPhoto = await potPhoto('#C9BFAF', '#6E665C', 120);
+  // Finding photographs come as PNG here, the pieces' as JPEG: the renderers take both.
+  const chipPhoto = await potPhoto('#C9BFAF', '#6E665C', 120, 'png');
   return {
     ...heading(),
     title: 'Spring porcelain and stoneware: dispatch and arrival',
