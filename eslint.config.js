@@ -58,6 +58,29 @@ module.exports = defineConfig([
     },
   },
   {
+    // Documents are drawn from the data they are given: no server code, database or HTTP.
+    files: ['documents/**/*.ts'],
+    rules: {
+      'no-restricted-imports': restrictedImports([
+        {
+          group: ['@/server', '@/server/*', '**/server/*'],
+          message: 'A renderer takes its data as an argument: it imports no server code.',
+        },
+        {
+          group: ['kysely', 'kysely/*', 'better-sqlite3', 'express', 'node:http', 'node:https'],
+          message: 'A renderer does no database or HTTP work: the server gathers the data first.',
+        },
+      ]),
+      'no-restricted-globals': [
+        'error',
+        {
+          name: 'fetch',
+          message: 'A renderer does no HTTP work: the server gathers the data first.',
+        },
+      ],
+    },
+  },
+  {
     // Client: route → screen → hook → API client. Screens and components reach the API only
     // through the hooks in hooks/queries.
     files: ['app/**/*.{ts,tsx}', 'components/**/*.{ts,tsx}'],

@@ -56,6 +56,25 @@ describe('the lint keeps the layers', () => {
     ).not.toContain('no-restricted-globals');
   });
 
+  it('refuses server code, the database and HTTP in the PDF renderers', async () => {
+    for (const code of [
+      "import { scoped } from '@/server/access/scoped';\nexport const s = scoped;\n",
+      "import { scoped } from '../server/access/scoped';\nexport const s = scoped;\n",
+      "import { sql } from 'kysely';\nexport const q = sql`1`;\n",
+    ]) {
+      expect(await brokenRules('documents/example.ts', code)).toContain('no-restricted-imports');
+    }
+    expect(
+      await brokenRules('documents/layout/example.ts', "export const get = () => fetch('/x');\n"),
+    ).toContain('no-restricted-globals');
+    expect(
+      await brokenRules(
+        'documents/example.ts',
+        "import { formatMoney } from '@/shared/money/format';\nexport const f = formatMoney;\n",
+      ),
+    ).toEqual([]);
+  });
+
   it('refuses anything but routes under app/', async () => {
     expect(await brokenRules('app/(studio)/helpers.ts', 'export const x = 1;\n')).toContain(
       'no-restricted-syntax',

@@ -1,0 +1,55 @@
+// Dates and measures for people, by the data's locale (Intl, ECMA-402).
+
+const dateFormats = new Map<string, Intl.DateTimeFormat>();
+
+/**
+ * A calendar date (YYYY-MM-DD) as the locale writes it, day, short month and year ("14 Mar 2026"
+ * in en-GB). Read and written in UTC, so the day never shifts with the machine's time zone.
+ */
+export function formatDate(isoDate: string, locale: string): string {
+  let format = dateFormats.get(locale);
+  if (format === undefined) {
+    format = new Intl.DateTimeFormat(locale, {
+      day: 'numeric',
+      month: 'short',
+      year: 'numeric',
+      timeZone: 'UTC',
+    });
+    dateFormats.set(locale, format);
+  }
+  return format.format(new Date(`${isoDate}T00:00:00Z`));
+}
+
+const numberFormats = new Map<string, Intl.NumberFormat>();
+
+function numberFormat(locale: string, options: Intl.NumberFormatOptions): Intl.NumberFormat {
+  const key = `${locale}|${JSON.stringify(options)}`;
+  let format = numberFormats.get(key);
+  if (format === undefined) {
+    format = new Intl.NumberFormat(locale, options);
+    numberFormats.set(key, format);
+  }
+  return format;
+}
+
+/** Kilograms to one decimal place ("18.6 kg"). */
+export function formatKilograms(grams: number, locale: string): string {
+  return numberFormat(locale, {
+    style: 'unit',
+    unit: 'kilogram',
+    minimumFractionDigits: 1,
+    maximumFractionDigits: 1,
+  }).format(grams / 1000);
+}
+
+/** Kilograms to one decimal place as a bare number, for a column headed with its unit. */
+export function kilograms(grams: number, locale: string): string {
+  return numberFormat(locale, { minimumFractionDigits: 1, maximumFractionDigits: 1 }).format(
+    grams / 1000,
+  );
+}
+
+/** Millimetres ("12 mm"). */
+export function formatMillimetres(mm: number, locale: string): string {
+  return numberFormat(locale, { style: 'unit', unit: 'millimeter' }).format(mm);
+}
