@@ -6,6 +6,7 @@ import { type AppContext } from './context';
 import { healthRouter } from './health/health.router';
 import { apiNotFound } from './http/error-handler';
 import { sameOrigin } from './http/same-origin';
+import { outboxRouter } from './mail/outbox.router';
 import { meRouter } from './me/me.router';
 import { overviewRouter } from './overview/overview.router';
 import { photoFilesRouter, workPhotosRouter } from './photos/photos.router';
@@ -42,6 +43,7 @@ export function mountApi(app: Express, context: AppContext): void {
   app.use('/api/works/:id/photos', workPhotosRouter(context));
   app.use('/api/works', worksRouter(context));
   app.use('/api/photos', photoFilesRouter(context));
+  app.use('/api/outbox', outboxRouter(context));
 
   app.use('/api', apiNotFound);
 }

@@ -41,6 +41,10 @@ export const protectedRoutes: {
   { route: 'POST /api/venues', roles: ['owner', 'assistant'] },
   { route: 'GET /api/venues/:id', roles: ['owner', 'assistant'] },
   { route: 'PATCH /api/venues/:id', roles: ['owner', 'assistant'] },
+  { route: 'GET /api/outbox', roles: ['owner'] },
+  { route: 'GET /api/outbox/:id', roles: ['owner'] },
+  { route: 'GET /api/outbox/:id/attachments/:index', roles: ['owner'] },
+  { route: 'POST /api/outbox/:id/retry', roles: ['owner'] },
 ];
 
 /** A route's method (lower case, as supertest names it) and a path with an id for each parameter. */
