@@ -40,7 +40,8 @@ export function outboxRouter(context: AppContext) {
       const { id, index } = attachment.input(res).params;
       const file = await renderOutboxAttachment(context, scopeOf(res), id, index);
       res.attachment(file.filename);
-      res.type(file.contentType);
+      // As the recipe states it: Express's own setters would add a charset to text types.
+      res.setHeader('Content-Type', file.contentType);
       res.set('Cache-Control', 'private, no-store');
       res.send(file.content);
     })

@@ -48,7 +48,7 @@ const paragraphHtml = (text: string) => escapeHtml(text).replace(/\r?\n/g, '<br>
 function checkedUrl(url: string): string {
   const parsed = new URL(url);
   if (parsed.protocol !== 'https:' && parsed.protocol !== 'http:') {
-    throw new Error(`A mail's action must be a web address, not ${parsed.protocol}`);
+    throw new Error(`A mail’s action must be a web address, not ${parsed.protocol}`);
   }
   return parsed.href;
 }
