@@ -25,11 +25,9 @@ export type MailKind = z.infer<typeof mailKindSchema>;
  * the renderer registered for its kind.
  */
 export const attachmentRecipeSchema = z.looseObject({
-  kind: z
-    .string()
-    .regex(/^[a-z][a-z0-9-]{0,63}$/, {
-      error: 'An attachment kind is lower-case words and dashes.',
-    }),
+  kind: z.string().regex(/^[a-z][a-z0-9-]{0,63}$/, {
+    error: 'An attachment kind is lower-case words and dashes.',
+  }),
 });
 export type AttachmentRecipe = z.infer<typeof attachmentRecipeSchema>;
 
