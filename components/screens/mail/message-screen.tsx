@@ -99,7 +99,7 @@ function MessageDetail({ message }: { message: OutboxMessage }) {
             { label: 'From', value: message.from, testID: 'message-from' },
             { label: 'To', value: message.to, testID: 'message-to' },
             { label: 'About', value: mailKindWords[message.kind] },
-            { label: 'Written', value: when(message.createdAt) },
+            { label: 'Written', value: when(message.createdAt), testID: 'message-written' },
             { label: 'Sent', value: when(message.sentAt), testID: 'message-sent-at' },
             { label: 'Attempts', value: String(message.attempts), numeric: true },
             ...(message.messageId ? [{ label: 'Message-ID', value: message.messageId }] : []),
