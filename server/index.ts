@@ -40,6 +40,10 @@ async function main() {
   const app = createApp(context);
 
   const smtp = await mailServer(config);
+  if (smtp.local && config.publicUrl) {
+    // A public address says people rely on this install: their mail would reach nobody.
+    logger.warn('SMTP_URL is not set: e-mail goes to the local stand-in only and reaches nobody.');
+  }
   const transport = createMailTransport(smtp.url);
   const mailWorker = createMailWorker({
     db,
