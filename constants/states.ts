@@ -1,4 +1,5 @@
 import { type ConsignmentState, type LineState } from '@/shared/schemas/consignment';
+import { type OutboxState } from '@/shared/schemas/outbox';
 import { type WorkStatus } from '@/shared/schemas/work';
 
 import { type StateTone } from './theme';
@@ -47,4 +48,15 @@ export const lineStateLooks: Record<LineState, StateLook> = {
   damaged: { word: 'Damaged', shape: 'diamond', tone: 'attention' },
   lost: { word: 'Lost', shape: 'cross', tone: 'danger' },
   withdrawn: { word: 'Withdrawn', shape: 'bar', tone: 'quiet' },
+};
+
+/**
+ * A message in the outbox. A waiting message that has already failed once is shown apart from
+ * one not yet tried: the maker should see that the mail server is refusing or out of reach.
+ */
+export const outboxStateLooks: Record<OutboxState | 'retrying', StateLook> = {
+  queued: { word: 'Waiting to go', shape: 'ring', tone: 'quiet' },
+  retrying: { word: 'Trying again', shape: 'triangle-right', tone: 'attention' },
+  sent: { word: 'Sent', shape: 'square', tone: 'done' },
+  failed: { word: 'Not sent', shape: 'cross', tone: 'danger' },
 };

@@ -14,6 +14,7 @@ export const staleTimes = {
   workFacets: minute,
   venues: minute,
   studio: 5 * minute,
+  outbox: 15 * second,
 } as const;
 
 export function createQueryClient(): QueryClient {

@@ -1,6 +1,8 @@
 import fs from 'node:fs';
 import path from 'node:path';
 
+import { defaultMailFrom } from './mail/transport';
+
 /** Settings from the environment, with the defaults that make `npm start` work on a fresh clone. */
 export function readConfig(env: NodeJS.ProcessEnv = process.env) {
   const dbFile = env.SAGGAR_DB ?? 'data/saggar.db';
@@ -20,6 +22,11 @@ export function readConfig(env: NodeJS.ProcessEnv = process.env) {
     authSecret: env.SAGGAR_AUTH_SECRET ?? localSecret(dataDir),
     logLevel: env.LOG_LEVEL ?? 'info',
     trustProxy: trustProxySetting(env.SAGGAR_TRUST_PROXY),
+    /** The mail server messages go to; unset, `npm start` runs a local stand-in and uses it. */
+    smtpUrl: nonEmpty(env.SMTP_URL),
+    mailFrom: nonEmpty(env.SAGGAR_MAIL_FROM) ?? defaultMailFrom,
+    /** Where the local stand-in keeps what it receives, one .eml file a message. */
+    mailDir: path.join(dataDir, 'mail'),
   };
 }
 
@@ -28,6 +35,10 @@ export function readConfig(env: NodeJS.ProcessEnv = process.env) {
  * `trust proxy` takes it (a number of hops, or addresses and subnets such as `loopback` or
  * `10.0.0.0/8`). Believing it from anyone would let a client pick its own address.
  */
+function nonEmpty(value: string | undefined): string | null {
+  return value === undefined || value.trim() === '' ? null : value.trim();
+}
+
 function trustProxySetting(value: string | undefined): boolean | string | number {
   if (value === undefined || value.trim() === '') return false;
   return /^\d+$/.test(value.trim()) ? Number(value) : value.trim();

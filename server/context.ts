@@ -4,6 +4,12 @@ import { type Logger } from 'pino';
 import { sessionCookieName } from './access/session-cookie';
 import { type AuthOptions, createAuth } from './auth/auth';
 import { type Db } from './db/database';
+import {
+  type AttachmentRenderer,
+  attachmentRenderer,
+  productAttachmentKinds,
+} from './mail/attachments';
+import { defaultMailFrom } from './mail/transport';
 
 /** Everything the app needs from outside, so tests can build it over an in-memory database. */
 export type AppContext = {
@@ -26,21 +32,36 @@ export type AppContext = {
   sessionCookie: { name: string; secret: string };
   /** Express's `trust proxy`: false unless SAGGAR_TRUST_PROXY names the proxy in front. */
   trustProxy: boolean | string | number;
+  /** The From address of the studio's e-mail (SAGGAR_MAIL_FROM). */
+  mailFrom: string;
+  /**
+   * Makes an e-mail attachment's bytes from its recipe, for the mail worker and for the page that
+   * shows what was sent; refuses a kind nobody registered.
+   */
+  renderAttachment: AttachmentRenderer;
 };
 
 export type ContextOptions = Omit<
   AppContext,
-  'auth' | 'signInLimit' | 'publicUrl' | 'sessionCookie' | 'trustProxy'
+  | 'auth'
+  | 'signInLimit'
+  | 'publicUrl'
+  | 'sessionCookie'
+  | 'trustProxy'
+  | 'mailFrom'
+  | 'renderAttachment'
 > &
   Pick<AuthOptions, 'secret'> &
   Partial<Pick<AuthOptions, 'publicUrl'>> &
-  Partial<Pick<AppContext, 'signInLimit' | 'trustProxy'>>;
+  Partial<Pick<AppContext, 'signInLimit' | 'trustProxy' | 'mailFrom' | 'renderAttachment'>>;
 
 export function createContext(options: ContextOptions): AppContext {
   const { secret, publicUrl = null, ...rest } = options;
   return {
     signInLimit: { perAccount: 10, perAddress: 50, windowMs: 15 * 60 * 1000 },
     trustProxy: false,
+    mailFrom: defaultMailFrom,
+    renderAttachment: attachmentRenderer(productAttachmentKinds),
     ...rest,
     publicUrl,
     sessionCookie: {

@@ -1,13 +1,23 @@
 import { createApp } from './app';
-import { readConfig } from './config';
+import { type Config, readConfig } from './config';
 import { createContext } from './context';
 import { openDatabase } from './db/database';
 import { migrateToLatest } from './db/migrate';
 import { demoSignIns } from './demo/demo-studio';
 import { seedDemoIfEmpty } from './demo/seed';
+import { type DevSmtpServer, startDevSmtpServer } from './dev-services/smtp-server';
 import { devWebProxy } from './http/dev-web-proxy';
 import { webApp } from './http/web-app';
 import { createLogger } from './logger';
+import { createMailWorker } from './mail/mail-worker';
+import { createMailTransport } from './mail/transport';
+
+/** SMTP_URL if set; otherwise the local stand-in, started here, keeping mail under data/mail/. */
+async function mailServer(config: Config): Promise<{ url: string; local: DevSmtpServer | null }> {
+  if (config.smtpUrl) return { url: config.smtpUrl, local: null };
+  const local = await startDevSmtpServer({ mailDir: config.mailDir });
+  return { url: local.url, local };
+}
 
 async function main() {
   const config = readConfig();
@@ -25,8 +35,24 @@ async function main() {
     trustedOrigins: config.trustedOrigins,
     filesDir: config.filesDir,
     trustProxy: config.trustProxy,
+    mailFrom: config.mailFrom,
   });
   const app = createApp(context);
+
+  const smtp = await mailServer(config);
+  if (smtp.local && config.publicUrl) {
+    // A public address says people rely on this install: their mail would reach nobody.
+    logger.warn('SMTP_URL is not set: e-mail goes to the local stand-in only and reaches nobody.');
+  }
+  const transport = createMailTransport(smtp.url);
+  const mailWorker = createMailWorker({
+    db,
+    transport,
+    from: context.mailFrom,
+    renderAttachment: context.renderAttachment,
+    logger: logger.child({ part: 'mail' }),
+  });
+  mailWorker.start();
 
   const server = app.listen(config.port, config.host, () => {
     const lines = [
@@ -34,15 +60,40 @@ async function main() {
       `Database: ${config.dbFile}${seeded ? ' (demo data seeded)' : ''}`,
       'Demo sign-ins (password for all: ' + demoSignIns.password + '):',
       ...demoSignIns.people.map((p) => `  ${p.email.padEnd(24)} ${p.description}`),
+      smtp.local
+        ? `Mail: local stand-in at ${smtp.local.url}; what it receives is kept in ${config.mailDir}`
+        : `Mail: sent through ${redactedUrl(smtp.url)}`,
     ];
     console.log(lines.join('\n'));
   });
 
+  // Stop taking requests and looking for mail; a message being sent is finished (or given back
+  // to the queue) before the database closes.
+  let stopping = false;
   const stop = () => {
-    server.close(() => void db.destroy().then(() => process.exit(0)));
+    if (stopping) return;
+    stopping = true;
+    const closed = new Promise<void>((resolve) => server.close(() => resolve()));
+    void Promise.all([closed, mailWorker.stop()]).then(async () => {
+      transport.close();
+      await smtp.local?.stop();
+      await db.destroy();
+      process.exit(0);
+    });
   };
   process.on('SIGINT', stop);
   process.on('SIGTERM', stop);
+}
+
+/** An SMTP address for the log, without its password. */
+function redactedUrl(url: string): string {
+  try {
+    const parsed = new URL(url);
+    if (parsed.password) parsed.password = '***';
+    return parsed.toString();
+  } catch {
+    return 'the configured SMTP_URL';
+  }
 }
 
 main().catch((err: unknown) => {

@@ -10,6 +10,7 @@ import { healthRouter } from './health/health.router';
 import { apiNotFound } from './http/error-handler';
 import { sameOrigin } from './http/same-origin';
 import { invitationsRouter } from './invitations/invitations.router';
+import { outboxRouter } from './mail/outbox.router';
 import { meRouter } from './me/me.router';
 import { overviewRouter } from './overview/overview.router';
 import { photoFilesRouter, workPhotosRouter } from './photos/photos.router';
@@ -50,6 +51,7 @@ export function mountApi(app: Express, context: AppContext): void {
   app.use('/api/consignment-lines/:lineId/condition-reports', conditionReportsRouter(context));
   app.use('/api/condition-photos', conditionPhotosRouter(context));
   app.use('/api/invitations', invitationsRouter(context));
+  app.use('/api/outbox', outboxRouter(context));
 
   app.use('/api', apiNotFound);
 }

@@ -2,7 +2,7 @@ import { Stack } from 'expo-router';
 
 import { GateFallback } from '@/components/ui/gate-fallback';
 import { Shell } from '@/components/ui/shell';
-import { studioNav } from '@/constants/navigation';
+import { navFor, studioNav } from '@/constants/navigation';
 import { useMembershipGate } from '@/hooks/session';
 
 /** Owners and assistants only: signed out goes to sign-in, gallery staff to their venue. */
@@ -10,7 +10,7 @@ export default function StudioLayout() {
   const gate = useMembershipGate('studio');
   if (gate.status !== 'ready') return <GateFallback gate={gate} />;
   return (
-    <Shell nav={studioNav} me={gate.me} membership={gate.membership}>
+    <Shell nav={navFor(studioNav, gate.membership.role)} me={gate.me} membership={gate.membership}>
       <Stack screenOptions={{ headerShown: false }} />
     </Shell>
   );

@@ -45,3 +45,17 @@ export function formatWeight(grams: number | null): string {
   if (grams < 1000) return `${grams} g`;
   return `${(grams / 1000).toLocaleString('en-GB', { maximumFractionDigits: 2 })} kg`;
 }
+
+/** An instant (ISO-8601) as the studio's clock shows it: "2 Nov 2026, 09:15". */
+export function formatDateTime(iso: string, timeZone: string): string {
+  const date = new Date(iso);
+  if (Number.isNaN(date.getTime())) return iso;
+  return new Intl.DateTimeFormat('en-GB', {
+    day: 'numeric',
+    month: 'short',
+    year: 'numeric',
+    hour: '2-digit',
+    minute: '2-digit',
+    timeZone,
+  }).format(date);
+}

@@ -1,3 +1,5 @@
+import { sql } from 'kysely';
+
 import { type ConsignmentState } from '@/shared/schemas/consignment';
 
 import { type Db } from '../db/database';
@@ -79,6 +81,15 @@ export const scoped = {
           .onRef('files.id', '=', 'work_photos.file_id')
           .onRef('files.studio_id', '=', 'works.studio_id'),
       );
+  },
+
+  /**
+   * The studio's e-mail. A venue's staff see none of it: what the studio wrote to them reaches
+   * them as mail, and the rest is the studio's own.
+   */
+  outbox(db: Db, scope: Scope) {
+    const q = db.selectFrom('outbox').where('outbox.studio_id', '=', scope.studioId);
+    return scope.venueId === null ? q : q.where(sql<boolean>`1 = 0`);
   },
 
   files(db: Db, scope: Scope) {

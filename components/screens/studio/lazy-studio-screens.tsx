@@ -21,6 +21,10 @@ function lazyScreen<Props extends object>(pick: () => Promise<ComponentType<Prop
   };
 }
 
+export const MailScreen = lazyScreen(async () => (await loadStudioScreens()).MailScreen);
+export const MailMessageScreen = lazyScreen(
+  async () => (await loadStudioScreens()).MailMessageScreen,
+);
 export const OverviewScreen = lazyScreen(async () => (await loadStudioScreens()).OverviewScreen);
 export const SettingsScreen = lazyScreen(async () => (await loadStudioScreens()).SettingsScreen);
 export const VenueScreen = lazyScreen(async () => (await loadStudioScreens()).VenueScreen);

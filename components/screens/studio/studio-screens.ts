@@ -1,5 +1,7 @@
 // Every screen of the studio side. Imported only through `lazy-studio-screens.tsx`, so that they
 // and everything only they use (forms, tables, photos, money rules) load together as one chunk.
+export { MailScreen } from '../mail/mail-screen';
+export { MailMessageScreen } from '../mail/message-screen';
 export { OverviewScreen } from '../overview/overview-screen';
 export { SettingsScreen } from '../settings/settings-screen';
 export { VenueScreen } from '../venue/venue-screen';

@@ -3,10 +3,12 @@ import { type Migration } from 'kysely';
 import * as m001 from './001-init';
 import * as m002 from './002-sign-in-limits';
 import * as m003 from './003-consignment-flow';
+import * as m004 from './004-outbox-delivery';
 
 /** Every migration, in order. A new one is a new file and one more line here. */
 export const migrations: Record<string, Migration> = {
   '001-init': m001,
   '002-sign-in-limits': m002,
   '003-consignment-flow': m003,
+  '004-outbox-delivery': m004,
 };

@@ -4,7 +4,11 @@ import sharp from 'sharp';
 import { demoSignIns } from '@/server/demo/demo-studio';
 
 /** Signs in through the form, as a person would, and waits for the studio's overview. */
-export async function signInToStudio(page: Page, url: string, email = demoSignIns.people[0].email) {
+export async function signInToStudio(
+  page: Page,
+  url: string,
+  email: string = demoSignIns.people[0].email,
+) {
   await page.goto(`${url}/sign-in`);
   await page.getByTestId('sign-in-screen').waitFor();
   await page.getByTestId('sign-in-email').fill(email);

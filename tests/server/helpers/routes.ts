@@ -67,6 +67,10 @@ export const protectedRoutes: {
     route: 'POST /api/consignment-lines/:lineId/condition-reports',
     roles: ['owner', 'assistant', 'gallery'],
   },
+  { route: 'GET /api/outbox', roles: ['owner'] },
+  { route: 'GET /api/outbox/:id', roles: ['owner'] },
+  { route: 'GET /api/outbox/:id/attachments/:index', roles: ['owner'] },
+  { route: 'POST /api/outbox/:id/retry', roles: ['owner'] },
 ];
 
 /** A route's method (lower case, as supertest names it) and a path with an id for each parameter. */

@@ -15,8 +15,8 @@ const emails: Record<Who, string> = {
  * Studio A with an owner, an assistant and a member of its venue's staff; studio B with its own
  * owner and venue, whose ids the tests use as "another studio's".
  */
-export async function studioFixture() {
-  const ctx = await createTestApp();
+export async function studioFixture(options: Parameters<typeof createTestApp>[0] = {}) {
+  const ctx = await createTestApp(options);
   const { db, app } = ctx;
   const studioA = await addStudio(db, 'Studio A');
   const studioB = await addStudio(db, 'Studio B');

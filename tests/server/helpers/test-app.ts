@@ -18,11 +18,17 @@ type App = Parameters<typeof request>[0];
 
 export const password = 'correct horse battery staple';
 
-/** The real app over a fresh in-memory database migrated to latest. */
+/**
+ * The real app over a fresh in-memory database migrated to latest, or over `dbFile` (already
+ * migrated by a first app, for several apps sharing one database as several processes would).
+ */
 export async function createTestApp(
-  options: Partial<Pick<AppContext, 'signInLimit' | 'trustProxy'>> & { publicUrl?: string } = {},
+  options: Partial<
+    Pick<AppContext, 'signInLimit' | 'trustProxy' | 'mailFrom' | 'renderAttachment'>
+  > & { publicUrl?: string; dbFile?: string } = {},
 ) {
-  const db = openDatabase(':memory:');
+  const { dbFile = ':memory:', ...contextOptions } = options;
+  const db = openDatabase(dbFile);
   await migrateToLatest(db);
   const context = createContext({
     db,
@@ -32,7 +38,7 @@ export async function createTestApp(
     trustedOrigins: [],
     // Created on the first upload; each app has its own, so tests never share stored files.
     filesDir: path.join(os.tmpdir(), 'saggar-test-files', randomUUID()),
-    ...options,
+    ...contextOptions,
   });
   return { app: createApp(context), db, context };
 }
