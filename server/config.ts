@@ -19,6 +19,8 @@ export function readConfig(env: NodeJS.ProcessEnv = process.env) {
     trustedOrigins: (env.SAGGAR_TRUSTED_ORIGINS ?? '').split(',').filter(Boolean),
     /** The address people use, e.g. https://saggar.example: HTTPS makes the cookie Secure. */
     publicUrl: env.SAGGAR_PUBLIC_URL ?? null,
+    /** Where links in e-mails and the QR codes on labels point. */
+    appUrl: (env.SAGGAR_PUBLIC_URL ?? `http://localhost:${env.PORT ?? 8080}`).replace(/\/+$/, ''),
     authSecret: env.SAGGAR_AUTH_SECRET ?? localSecret(dataDir),
     logLevel: env.LOG_LEVEL ?? 'info',
     trustProxy: trustProxySetting(env.SAGGAR_TRUST_PROXY),

@@ -4,11 +4,8 @@ import { type Logger } from 'pino';
 import { sessionCookieName } from './access/session-cookie';
 import { type AuthOptions, createAuth } from './auth/auth';
 import { type Db } from './db/database';
-import {
-  type AttachmentRenderer,
-  attachmentRenderer,
-  productAttachmentKinds,
-} from './mail/attachments';
+import { documentAttachmentKinds } from './documents/document-attachments';
+import { type AttachmentRenderer, attachmentRenderer } from './mail/attachments';
 import { defaultMailFrom } from './mail/transport';
 
 /** Everything the app needs from outside, so tests can build it over an in-memory database. */
@@ -21,6 +18,8 @@ export type AppContext = {
   trustedOrigins: readonly string[];
   /** Where people reach the app, e.g. https://saggar.example; null on a plain local install. */
   publicUrl: string | null;
+  /** Where links in e-mails and the QR codes on labels point: publicUrl, or this machine. */
+  appUrl: string;
   /** Where uploads live, by content hash: `<dataDir>/files` (a temporary folder in tests). */
   filesDir: string;
   /**
@@ -50,20 +49,31 @@ export type ContextOptions = Omit<
   | 'trustProxy'
   | 'mailFrom'
   | 'renderAttachment'
+  | 'appUrl'
 > &
   Pick<AuthOptions, 'secret'> &
   Partial<Pick<AuthOptions, 'publicUrl'>> &
-  Partial<Pick<AppContext, 'signInLimit' | 'trustProxy' | 'mailFrom' | 'renderAttachment'>>;
+  Partial<
+    Pick<AppContext, 'signInLimit' | 'trustProxy' | 'mailFrom' | 'renderAttachment' | 'appUrl'>
+  >;
 
 export function createContext(options: ContextOptions): AppContext {
-  const { secret, publicUrl = null, ...rest } = options;
+  const {
+    secret,
+    publicUrl = null,
+    appUrl = publicUrl ?? 'http://localhost:8080',
+    ...rest
+  } = options;
   return {
     signInLimit: { perAccount: 10, perAddress: 50, windowMs: 15 * 60 * 1000 },
     trustProxy: false,
     mailFrom: defaultMailFrom,
-    renderAttachment: attachmentRenderer(productAttachmentKinds),
+    renderAttachment: attachmentRenderer(
+      documentAttachmentKinds({ filesDir: options.filesDir, appUrl }),
+    ),
     ...rest,
     publicUrl,
+    appUrl,
     sessionCookie: {
       name: sessionCookieName(publicUrl?.startsWith('https://') ?? false),
       secret,

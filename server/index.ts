@@ -31,6 +31,7 @@ async function main() {
     logger,
     secret: config.authSecret,
     publicUrl: config.publicUrl,
+    appUrl: config.appUrl,
     web: config.webDevUrl ? await devWebProxy(config.webDevUrl) : webApp(config.webRoot),
     trustedOrigins: config.trustedOrigins,
     filesDir: config.filesDir,

@@ -51,7 +51,7 @@ function checkTermsAllowed(scope: Scope, body: { terms?: unknown }) {
 }
 
 /** `/api/consignments`: batches of work sent to a venue, and their life until they are sent. */
-export function consignmentsRouter({ db }: AppContext) {
+export function consignmentsRouter({ db, appUrl }: AppContext) {
   return express
     .Router()
     .get('/', anyone, list, async (_req, res) => {
@@ -87,7 +87,7 @@ export function consignmentsRouter({ db }: AppContext) {
       res.json(await agreeConsignment(db, scopeOf(res), byId.input(res).params.id));
     })
     .post('/:id/dispatch', studio, byId, async (_req, res) => {
-      res.json(await dispatchConsignment(db, scopeOf(res), byId.input(res).params.id));
+      res.json(await dispatchConsignment(db, scopeOf(res), byId.input(res).params.id, { appUrl }));
     })
     .post('/:id/cancel', studio, byId, async (_req, res) => {
       res.json(await cancelConsignment(db, scopeOf(res), byId.input(res).params.id));

@@ -3,6 +3,7 @@ import {
   exposureOn,
   insuranceValue,
   isoDateInTimeZone,
+  splitSale,
   sumMoney,
   trySplitSale,
 } from '@/shared/money';
@@ -135,6 +136,14 @@ function toLine(
         ? conditionDifferences(dispatchCheck.findings, arrivalCheck.findings)
         : [],
     weightG: row.weight_g,
+    sale:
+      row.state === 'sold' && row.sold_on !== null && row.sale_price !== null
+        ? {
+            soldOn: row.sold_on,
+            price: { amount: row.sale_price, currency: row.currency },
+            split: splitSale(terms, listPrice, { amount: row.sale_price, currency: row.currency }),
+          }
+        : null,
   };
 }
 

@@ -10,6 +10,7 @@ import { inviteVenueStaff } from '../invitations/invitations.service';
 import { getStudio } from '../studio/studio.service';
 import { listLineRows, updateConsignmentIn, withdrawOpenLines } from './consignments.repository';
 import { consignmentRow, getConsignment, termsOf, wrongState } from './consignments.service';
+import { queueDispatchMail } from './dispatch-mail';
 
 /** Freezes the terms: from now the venue sees the consignment, and nothing of it changes. */
 export async function agreeConsignment(db: Db, scope: Scope, id: number): Promise<Consignment> {
@@ -49,7 +50,12 @@ export async function agreeConsignment(db: Db, scope: Scope, id: number): Promis
  * The venue's contact is e-mailed the consignment sheet, the condition report and the labels,
  * with an invitation to sign in, in the same transaction as the change.
  */
-export async function dispatchConsignment(db: Db, scope: Scope, id: number): Promise<Consignment> {
+export async function dispatchConsignment(
+  db: Db,
+  scope: Scope,
+  id: number,
+  { appUrl }: { appUrl: string },
+): Promise<Consignment> {
   await db.transaction().execute(async (trx) => {
     const row = await consignmentRow(trx, scope, id);
     if (row.state === 'draft') {
@@ -87,6 +93,16 @@ export async function dispatchConsignment(db: Db, scope: Scope, id: number): Pro
       id: row.venue_id,
       email: row.venue_email,
     });
+    const mailId = row.venue_email
+      ? await queueDispatchMail(trx, scope, {
+          row: { ...row, venue_email: row.venue_email },
+          studio,
+          lines,
+          dispatchDate,
+          invitationToken: invitation?.token ?? null,
+          appUrl,
+        })
+      : null;
     await writeAudit(trx, scope, {
       action: 'consignment.dispatched',
       entity: 'consignment',
@@ -97,6 +113,7 @@ export async function dispatchConsignment(db: Db, scope: Scope, id: number): Pro
         dispatchDate,
         dispatchedAt,
         mailedTo: row.venue_email,
+        mailId,
         invited: invitation !== null,
       },
     });

@@ -30,9 +30,3 @@ export function attachmentRenderer(kinds: AttachmentKinds): AttachmentRenderer {
     return render(recipe, db, owner);
   };
 }
-
-/**
- * The attachment kinds the product renders, each a document made from the data the recipe
- * names. Register a kind here (documents/ renders, this only looks the data up).
- */
-export const productAttachmentKinds: AttachmentKinds = {};

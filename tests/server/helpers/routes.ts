@@ -57,6 +57,12 @@ export const protectedRoutes: {
   { route: 'POST /api/consignments/:id/dispatch', roles: ['owner', 'assistant'] },
   { route: 'POST /api/consignments/:id/cancel', roles: ['owner', 'assistant'] },
   { route: 'POST /api/consignments/:id/acknowledge', roles: ['gallery'] },
+  { route: 'GET /api/consignments/:id/sheet.pdf', roles: ['owner', 'assistant', 'gallery'] },
+  {
+    route: 'GET /api/consignments/:id/condition-report.pdf',
+    roles: ['owner', 'assistant', 'gallery'],
+  },
+  { route: 'GET /api/consignments/:id/labels.pdf', roles: ['owner', 'assistant', 'gallery'] },
   { route: 'POST /api/condition-photos', roles: ['owner', 'assistant', 'gallery'] },
   { route: 'GET /api/condition-photos/:fileId', roles: ['owner', 'assistant', 'gallery'] },
   {

@@ -24,7 +24,7 @@ export const password = 'correct horse battery staple';
  */
 export async function createTestApp(
   options: Partial<
-    Pick<AppContext, 'signInLimit' | 'trustProxy' | 'mailFrom' | 'renderAttachment'>
+    Pick<AppContext, 'signInLimit' | 'trustProxy' | 'mailFrom' | 'renderAttachment' | 'appUrl'>
   > & { publicUrl?: string; dbFile?: string } = {},
 ) {
   const { dbFile = ':memory:', ...contextOptions } = options;

@@ -1,0 +1,42 @@
+import { create as contentDisposition } from 'content-disposition';
+import express from 'express';
+
+import { consignmentParamsSchema } from '@/shared/schemas/consignment';
+
+import { requireRole, scopeOf } from '../access/authenticate';
+import { type AppContext } from '../context';
+import { validate } from '../http/validate';
+import { photoStore } from '../photos/photo-store';
+import { type DocumentKind, renderConsignmentDocument } from './documents.service';
+
+const byId = validate({ params: consignmentParamsSchema });
+const anyone = requireRole('owner', 'assistant', 'gallery');
+
+/** The path under a consignment where each of its PDFs is served. */
+const documentPaths: Record<DocumentKind, string> = {
+  'consignment-sheet': '/:id/sheet.pdf',
+  'condition-report': '/:id/condition-report.pdf',
+  labels: '/:id/labels.pdf',
+};
+
+/**
+ * `/api/consignments/:id/*.pdf`: a consignment's documents, made from its current data for
+ * anyone who may see the consignment, shown in the browser and saved under a telling name.
+ */
+export function documentsRouter({ db, filesDir, appUrl }: AppContext) {
+  const store = photoStore(filesDir);
+  const router = express.Router();
+  for (const [kind, path] of Object.entries(documentPaths) as [DocumentKind, string][]) {
+    router.get(path, anyone, byId, async (_req, res) => {
+      const { id } = byId.input(res).params;
+      const document = await renderConsignmentDocument(db, store, scopeOf(res), id, kind, {
+        appUrl,
+      });
+      res.type('application/pdf');
+      res.set('Content-Disposition', contentDisposition(document.fileName, { type: 'inline' }));
+      res.set('Cache-Control', 'private, no-store');
+      res.send(document.bytes);
+    });
+  }
+  return router;
+}
