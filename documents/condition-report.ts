@@ -1,3 +1,4 @@
+import { formatDate } from '@/shared/format/dates';
 import { type ConditionGrade } from '@/shared/schemas/condition';
 import {
   type ConditionReportData,
@@ -17,7 +18,7 @@ import {
   stack,
   text,
 } from './layout/boxes';
-import { formatDate, formatMillimetres } from './layout/format';
+import { formatMillimetres } from './layout/format';
 import { drawGradeGlyph } from './layout/glyphs';
 import { fileIdentifier } from './layout/identity';
 import { createDocument, finishDocument } from './layout/page';

@@ -1,25 +1,5 @@
 // Dates and measures for people, by the data's locale (Intl, ECMA-402).
 
-const dateFormats = new Map<string, Intl.DateTimeFormat>();
-
-/**
- * A calendar date (YYYY-MM-DD) as the locale writes it, day, short month and year ("14 Mar 2026"
- * in en-GB). Read and written in UTC, so the day never shifts with the machine's time zone.
- */
-export function formatDate(isoDate: string, locale: string): string {
-  let format = dateFormats.get(locale);
-  if (format === undefined) {
-    format = new Intl.DateTimeFormat(locale, {
-      day: 'numeric',
-      month: 'short',
-      year: 'numeric',
-      timeZone: 'UTC',
-    });
-    dateFormats.set(locale, format);
-  }
-  return format.format(new Date(`${isoDate}T00:00:00Z`));
-}
-
 const numberFormats = new Map<string, Intl.NumberFormat>();
 
 function numberFormat(locale: string, options: Intl.NumberFormatOptions): Intl.NumberFormat {

@@ -1,7 +1,7 @@
+import { formatDate } from '@/shared/format/dates';
 import { type DocumentHeading, type DocumentParty } from '@/shared/schemas/documents';
 
 import { type Box, columns, drawing, nothing, stack, text } from './boxes';
-import { formatDate } from './format';
 import { contentLeft, contentWidth, ensureSpace } from './page';
 import { rule } from './paint';
 import { colours, type } from './style';

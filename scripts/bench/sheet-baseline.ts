@@ -5,7 +5,8 @@
 import PDFDocument from 'pdfkit';
 
 import { fonts } from '../../documents/layout/fonts';
-import { formatDate, formatKilograms, kilograms } from '../../documents/layout/format';
+import { formatKilograms, kilograms } from '../../documents/layout/format';
+import { formatDate } from '../../shared/format/dates';
 import { formatMoney } from '../../shared/money/format';
 import { type ConsignmentSheetData } from '../../shared/schemas/documents';
 

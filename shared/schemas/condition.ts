@@ -71,6 +71,13 @@ const reportFields = {
   notes: optionalText('notes', 2000, 'lines'),
 };
 
+/** Who examined a piece and when, as a check's form asks for them before its findings. */
+export const reportHeaderSchema = z.strictObject({
+  examinerName: reportFields.examinerName,
+  examinedOn: reportFields.examinedOn,
+  notes: reportFields.notes,
+});
+
 /** `POST /api/consignment-lines/:lineId/condition-reports` */
 export const conditionReportCreateSchema = z.strictObject({
   stage: conditionStageSchema,
@@ -121,3 +128,10 @@ export const conditionDifferenceSchema = z.object({
   before: findingSchema.nullable(),
 });
 export type ConditionDifference = z.infer<typeof conditionDifferenceSchema>;
+
+/** `POST /api/condition-photos` answers the stored photo, to name in a finding. */
+export const conditionPhotoSchema = z.object({ fileId: z.number().int(), url: z.string() });
+export type ConditionPhoto = z.infer<typeof conditionPhotoSchema>;
+
+/** A report as `POST …/condition-reports` answers it: the check and its line. */
+export const conditionReportSchema = conditionCheckSchema.extend({ lineId: z.number().int() });

@@ -194,6 +194,8 @@ export const consignmentLineSchema = z.object({
   /** What the arrival check found that the dispatch check did not (or no longer). */
   differences: z.array(conditionDifferenceSchema),
   weightG: z.number().int().nullable(),
+  /** The sale, once sold: when, for how much, and its split under the consignment's terms. */
+  sale: z.object({ soldOn: isoDateSchema, price: moneySchema, split: saleSplitSchema }).nullable(),
 });
 export type ConsignmentLine = z.infer<typeof consignmentLineSchema>;
 

@@ -35,7 +35,8 @@ export type InvitationSummary = z.infer<typeof invitationSummarySchema>;
  */
 export const invitationAcceptSchema = z.strictObject({
   token: tokenSchema,
-  name: lineText('name', 120).min(1, { error: 'Enter your name.' }),
+  /** The new person's name; left out when the e-mail already has an account. */
+  name: lineText('name', 120).optional(),
   password: newPasswordSchema,
 });
 export type InvitationAccept = z.infer<typeof invitationAcceptSchema>;
