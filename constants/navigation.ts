@@ -9,6 +9,7 @@ export type NavItem = { key: string; label: string; href: Href; roles?: readonly
 export const studioNav: readonly NavItem[] = [
   { key: 'overview', label: 'Overview', href: '/' },
   { key: 'works', label: 'Works', href: '/works' },
+  { key: 'consignments', label: 'Consignments', href: '/consignments' },
   { key: 'venues', label: 'Venues', href: '/venues' },
   { key: 'mail', label: 'Sent mail', href: '/mail', roles: ['owner'] },
   { key: 'settings', label: 'Settings', href: '/settings' },

@@ -1,3 +1,4 @@
+import { type ConditionGrade } from '@/shared/schemas/condition';
 import { type ConsignmentState, type LineState } from '@/shared/schemas/consignment';
 import { type OutboxState } from '@/shared/schemas/outbox';
 import { type WorkStatus } from '@/shared/schemas/work';
@@ -59,4 +60,21 @@ export const outboxStateLooks: Record<OutboxState | 'retrying', StateLook> = {
   retrying: { word: 'Trying again', shape: 'triangle-right', tone: 'attention' },
   sent: { word: 'Sent', shape: 'square', tone: 'done' },
   failed: { word: 'Not sent', shape: 'cross', tone: 'danger' },
+};
+
+/** A condition check's overall grade, by word and shape (the worst finding decides it). */
+export const conditionGradeLooks: Record<ConditionGrade, StateLook> = {
+  sound: { word: 'Sound', shape: 'ring', tone: 'done' },
+  slight: { word: 'Slight', shape: 'dot', tone: 'quiet' },
+  marked: { word: 'Marked', shape: 'diamond', tone: 'attention' },
+  serious: { word: 'Serious', shape: 'cross', tone: 'danger' },
+};
+
+/** A step of a consignment's life on its page: done, the one to do next, or still to come. */
+export type StepStatus = 'done' | 'current' | 'todo' | 'later';
+export const stepLooks: Record<StepStatus, StateLook> = {
+  done: { word: 'Done', shape: 'square', tone: 'done' },
+  current: { word: 'Next', shape: 'triangle-right', tone: 'active' },
+  todo: { word: 'To do', shape: 'open-square', tone: 'quiet' },
+  later: { word: 'Later', shape: 'ring', tone: 'quiet' },
 };

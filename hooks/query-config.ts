@@ -15,6 +15,8 @@ export const staleTimes = {
   venues: minute,
   studio: 5 * minute,
   outbox: 15 * second,
+  consignments: 15 * second,
+  invitations: 0,
 } as const;
 
 export function createQueryClient(): QueryClient {

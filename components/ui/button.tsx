@@ -6,7 +6,8 @@ import { palette, radii, spacing, touchTarget } from '@/constants/theme';
 import { Text } from './text';
 import { focusRing, useFocusRing } from './use-focus-ring';
 
-type Variant = 'primary' | 'secondary' | 'quiet';
+/** `danger` is for what removes or calls off something: it looks unlike saving. */
+type Variant = 'primary' | 'secondary' | 'quiet' | 'danger';
 
 export type ButtonProps = Omit<PressableProps, 'children' | 'style'> & {
   label: string;
@@ -68,6 +69,7 @@ const styles = StyleSheet.create({
   primary: { backgroundColor: palette.accent, borderColor: palette.accent },
   secondary: { backgroundColor: palette.surface, borderColor: palette.outline },
   quiet: { backgroundColor: 'transparent', borderColor: 'transparent' },
+  danger: { backgroundColor: palette.surface, borderColor: palette.danger, borderWidth: 2 },
   inactive: { opacity: 0.7 },
 });
 
@@ -75,10 +77,12 @@ const pressedStyles = StyleSheet.create({
   primary: { backgroundColor: palette.accentPressed, borderColor: palette.accentPressed },
   secondary: { backgroundColor: palette.sunken },
   quiet: { backgroundColor: palette.sunken },
+  danger: { backgroundColor: palette.dangerSoft },
 });
 
 const labelStyles = StyleSheet.create({
   primary: { color: palette.onAccent },
   secondary: { color: palette.ink },
   quiet: { color: palette.accent, textDecorationLine: 'underline' },
+  danger: { color: palette.danger },
 });

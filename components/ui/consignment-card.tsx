@@ -1,30 +1,41 @@
+import { type Href } from 'expo-router';
 import { StyleSheet, View } from 'react-native';
 
 import { consignmentStateLooks } from '@/constants/states';
 import { spacing } from '@/constants/theme';
+import { formatMoney } from '@/shared/money/format';
 import { type ConsignmentSummary } from '@/shared/schemas/consignment';
+import { type Money } from '@/shared/schemas/money';
 
-import { Card } from './card';
 import { formatDate } from './format';
+import { LinkCard } from './link-card';
 import { StateMark } from './state-mark';
 import { Heading, Text } from './text';
 
 type ConsignmentCardProps = {
-  consignment: ConsignmentSummary;
+  consignment: ConsignmentSummary & { insuredOut?: Money | null };
+  /** Where the card leads: the studio's consignment page, or the venue's. */
+  href: Href;
   /** The venue's own screens leave out its name: they are all theirs. */
   showVenue?: boolean;
 };
 
 /** One consignment as a card: what, where, in what state, until when, and how it is going. */
-export function ConsignmentCard({ consignment, showVenue = true }: ConsignmentCardProps) {
-  const { id, reference, title, venueName, state, closingDate, linesOut, linesSold } = consignment;
+export function ConsignmentCard({ consignment, href, showVenue = true }: ConsignmentCardProps) {
+  const { id, reference, title, venueName, state, closingDate, linesOut, linesSold, insuredOut } =
+    consignment;
+  const look = consignmentStateLooks[state];
   return (
-    <Card testID={`consignment-card-${id}`}>
+    <LinkCard
+      href={href}
+      testID={`consignment-card-${id}`}
+      label={`${reference}, ${title}${showVenue ? `, at ${venueName}` : ''}, ${look.word}`}
+    >
       <View style={styles.top}>
         <Text variant="small" style={styles.reference}>
           {reference}
         </Text>
-        <StateMark look={consignmentStateLooks[state]} />
+        <StateMark look={look} />
       </View>
       <Heading level={3}>{title}</Heading>
       {showVenue ? <Text>{venueName}</Text> : null}
@@ -39,8 +50,17 @@ export function ConsignmentCard({ consignment, showVenue = true }: ConsignmentCa
         </Text>
         <Text variant="number">{linesSold}</Text>
         <Text variant="small">sold</Text>
+        {insuredOut && insuredOut.amount > 0 ? (
+          <>
+            <Text variant="small" aria-hidden>
+              ·
+            </Text>
+            <Text variant="number">{formatMoney(insuredOut)}</Text>
+            <Text variant="small">insured out</Text>
+          </>
+        ) : null}
       </View>
-    </Card>
+    </LinkCard>
   );
 }
 
@@ -53,5 +73,5 @@ const styles = StyleSheet.create({
     gap: spacing.sm,
   },
   reference: { fontVariant: ['tabular-nums'] },
-  counts: { flexDirection: 'row', alignItems: 'baseline', gap: spacing.xs },
+  counts: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'baseline', gap: spacing.xs },
 });

@@ -9,4 +9,6 @@ export type SelectProps = {
   testID: string;
   /** The label of the empty choice, e.g. "Any status". */
   emptyLabel?: string;
+  /** What is wrong with the choice, in plain words, shown under it. */
+  error?: string;
 };

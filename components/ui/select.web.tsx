@@ -1,7 +1,7 @@
 import { useId } from 'react';
 import { StyleSheet, View } from 'react-native';
 
-import { spacing } from '@/constants/theme';
+import { fonts, palette, spacing } from '@/constants/theme';
 
 import { type SelectProps } from './select.types';
 import { Text } from './text';
@@ -10,7 +10,15 @@ import { webControlStyle } from './web-control-style';
 export type { SelectOption, SelectProps } from './select.types';
 
 /** The browser's own drop-down: keyboard, screen readers and phones all know it. */
-export function Select({ label, options, value, onChange, testID, emptyLabel }: SelectProps) {
+export function Select({
+  label,
+  options,
+  value,
+  onChange,
+  testID,
+  emptyLabel,
+  error,
+}: SelectProps) {
   const id = useId();
   return (
     <View style={styles.field}>
@@ -24,7 +32,8 @@ export function Select({ label, options, value, onChange, testID, emptyLabel }: 
         data-testid={testID}
         value={value}
         onChange={(event) => onChange(event.target.value)}
-        style={webControlStyle}
+        aria-invalid={error ? true : undefined}
+        style={error ? { ...webControlStyle, ...invalidStyle } : webControlStyle}
       >
         {emptyLabel ? <option value="">{emptyLabel}</option> : null}
         {options.map((option) => (
@@ -33,10 +42,18 @@ export function Select({ label, options, value, onChange, testID, emptyLabel }: 
           </option>
         ))}
       </select>
+      {error ? (
+        <Text testID={`${testID}-error`} role="alert" style={styles.error}>
+          {error}
+        </Text>
+      ) : null}
     </View>
   );
 }
 
+const invalidStyle = { borderColor: palette.danger, borderWidth: 2 } as const;
+
 const styles = StyleSheet.create({
   field: { gap: spacing.xs },
+  error: { color: palette.danger, fontFamily: fonts.bodyStrong, fontSize: 15, lineHeight: 21 },
 });

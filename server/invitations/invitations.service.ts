@@ -102,6 +102,11 @@ export async function acceptInvitation(db: Db, input: InvitationAccept): Promise
       }
       userId = existing.id;
     } else {
+      if (!input.name) {
+        throw new HttpError('invalid_request', 'Some fields need attention.', [
+          { path: ['name'], message: 'Enter your name.' },
+        ]);
+      }
       userId = await createUserWithPassword(trx, {
         name: input.name,
         email: invitation.email,

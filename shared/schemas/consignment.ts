@@ -238,6 +238,14 @@ export const consignmentSchema = z.object({
 });
 export type Consignment = z.infer<typeof consignmentSchema>;
 
+/** `GET /api/venue/lines/:lineId`: one piece a venue holds, as its shelf label opens it. */
+export const venuePieceSchema = z.object({
+  studio: z.object({ id: z.number().int(), name: z.string() }),
+  consignment: consignmentSchema.pick({ id: true, reference: true, title: true, state: true }),
+  line: consignmentLineSchema,
+});
+export type VenuePiece = z.infer<typeof venuePieceSchema>;
+
 /** `POST /api/consignments/:id/acknowledge` (the venue): what arrived and in what state. */
 export const acknowledgeSchema = z.strictObject({
   reports: z

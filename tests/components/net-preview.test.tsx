@@ -1,7 +1,7 @@
 import { fireEvent, render, screen } from '@testing-library/react-native';
 
-import { NetPreview } from '@/components/screens/venue-form/net-preview';
-import { termsValues } from '@/components/screens/venue-form/venue-form-values';
+import { NetPreview } from '@/components/screens/terms-form/net-preview';
+import { termsValues } from '@/components/screens/terms-form/terms-form-values';
 import { defaultTerms } from '@/shared/schemas/terms';
 
 const usual = termsValues(defaultTerms);

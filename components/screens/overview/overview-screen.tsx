@@ -8,11 +8,12 @@ import { spacing } from '@/constants/theme';
 import { useOverviewQuery } from '@/hooks/queries/overview';
 import { type Overview } from '@/shared/schemas/overview';
 
+import { Exposure } from './exposure';
 import { Figure } from './figure';
 import { StatusList } from './status-list';
 
 function OverviewBody({ overview }: { overview: Overview }) {
-  const { works, venues, consignments } = overview;
+  const { works, venues, consignments, exposure } = overview;
   if (works.total === 0 && venues.total === 0 && consignments.outCount === 0) {
     return (
       <EmptyView
@@ -34,6 +35,10 @@ function OverviewBody({ overview }: { overview: Overview }) {
         />
       </View>
       <View style={styles.section}>
+        <Heading level={2}>At risk</Heading>
+        <Exposure exposure={exposure} />
+      </View>
+      <View style={styles.section}>
         <Heading level={2}>Where the work is</Heading>
         <StatusList byStatus={works.byStatus} />
       </View>
@@ -43,7 +48,11 @@ function OverviewBody({ overview }: { overview: Overview }) {
           <Text variant="small">Nothing is out at the moment.</Text>
         ) : (
           consignments.out.map((consignment) => (
-            <ConsignmentCard key={consignment.id} consignment={consignment} />
+            <ConsignmentCard
+              key={consignment.id}
+              consignment={consignment}
+              href={{ pathname: '/consignments/[id]', params: { id: String(consignment.id) } }}
+            />
           ))
         )}
       </View>

@@ -25,6 +25,15 @@ export const MailScreen = lazyScreen(async () => (await loadStudioScreens()).Mai
 export const MailMessageScreen = lazyScreen(
   async () => (await loadStudioScreens()).MailMessageScreen,
 );
+export const ConsignmentScreen = lazyScreen(
+  async () => (await loadStudioScreens()).ConsignmentScreen,
+);
+export const ConsignmentCreateScreen = lazyScreen(
+  async () => (await loadStudioScreens()).ConsignmentCreateScreen,
+);
+export const ConsignmentsScreen = lazyScreen(
+  async () => (await loadStudioScreens()).ConsignmentsScreen,
+);
 export const OverviewScreen = lazyScreen(async () => (await loadStudioScreens()).OverviewScreen);
 export const SettingsScreen = lazyScreen(async () => (await loadStudioScreens()).SettingsScreen);
 export const VenueScreen = lazyScreen(async () => (await loadStudioScreens()).VenueScreen);

@@ -1,5 +1,8 @@
 // Every screen of the studio side. Imported only through `lazy-studio-screens.tsx`, so that they
 // and everything only they use (forms, tables, photos, money rules) load together as one chunk.
+export { ConsignmentScreen } from '../consignment/consignment-screen';
+export { ConsignmentCreateScreen } from '../consignment-form/consignment-create-screen';
+export { ConsignmentsScreen } from '../consignments/consignments-screen';
 export { MailScreen } from '../mail/mail-screen';
 export { MailMessageScreen } from '../mail/message-screen';
 export { OverviewScreen } from '../overview/overview-screen';

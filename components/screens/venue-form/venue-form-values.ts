@@ -1,24 +1,6 @@
-import { moneyText, type Parsed, percentText } from '@/components/ui/decimal-text';
 import { bindForm, type FieldBindings } from '@/components/ui/form/binding';
-import {
-  choiceCodec,
-  moneyCodec,
-  numberCodec,
-  percentCodec,
-  textCodec,
-  yesNoCodec,
-} from '@/components/ui/form/codecs';
-import {
-  type CommissionVat,
-  defaultTerms,
-  type DiscountRule,
-  type InsuranceBasis,
-  type Insurer,
-  type PaymentTerms,
-  type Terms,
-  termsSchema,
-  type VenueRole,
-} from '@/shared/schemas/terms';
+import { choiceCodec, textCodec } from '@/components/ui/form/codecs';
+import { defaultTerms } from '@/shared/schemas/terms';
 import {
   type Venue,
   type VenueCreateParsed,
@@ -28,22 +10,12 @@ import {
   venueUpdateSchema,
 } from '@/shared/schemas/venue';
 
-/** The terms as the form holds them: rates as percentages typed, amounts as typed. */
-export type TermsFormValues = {
-  currency: string;
-  commissionRate: string;
-  vatRate: string;
-  venueRole: VenueRole;
-  commissionVat: CommissionVat;
-  makerVatRegistered: 'yes' | 'no';
-  discountRule: DiscountRule;
-  insuranceBasis: InsuranceBasis;
-  agreedInsuranceValue: string;
-  insuredBy: Insurer;
-  insuredInTransitBy: Insurer;
-  paymentDays: string;
-  paymentFrom: PaymentTerms['from'];
-};
+import {
+  codeCodec,
+  termsFields,
+  type TermsFormValues,
+  termsValues,
+} from '../terms-form/terms-form-values';
 
 export type VenueFormValues = TermsFormValues & {
   name: string;
@@ -59,24 +31,6 @@ export type VenueFormValues = TermsFormValues & {
   vatNumber: string;
   notes: string;
 };
-export function termsValues(terms: Terms): TermsFormValues {
-  return {
-    currency: terms.currency,
-    commissionRate: percentText(terms.commissionRateBp),
-    vatRate: percentText(terms.vatRateBp),
-    venueRole: terms.venueRole,
-    commissionVat: terms.commissionVat,
-    makerVatRegistered: terms.makerVatRegistered ? 'yes' : 'no',
-    discountRule: terms.discountRule,
-    insuranceBasis: terms.insuranceBasis,
-    agreedInsuranceValue: moneyText(terms.agreedInsuranceValue),
-    insuredBy: terms.insuredBy,
-    insuredInTransitBy: terms.insuredInTransitBy,
-    paymentDays: String(terms.paymentTerms.days),
-    paymentFrom: terms.paymentTerms.from,
-  };
-}
-
 /** A new venue starts from the product's usual terms, in the studio's currency. */
 export function newVenueValues(currency: string): VenueFormValues {
   return {
@@ -114,44 +68,6 @@ export function venueValues(venue: Venue): VenueFormValues {
   };
 }
 
-/** A code typed in capitals or not (a currency, a country); blank is none. */
-const codeCodec = (text: string): Parsed<string> =>
-  text.trim() === '' ? { kind: 'empty' } : { kind: 'ok', value: text.trim().toUpperCase() };
-
-/** The terms fields, placed at `prefix` in the body (`defaultTerms.` in a venue's). */
-function termsFields(prefix: string, sent: () => boolean): FieldBindings<TermsFormValues> {
-  const at = (path: string) => ({ path: `${prefix}${path}`, when: sent });
-  return {
-    currency: { ...at('currency'), read: codeCodec },
-    commissionRate: {
-      ...at('commissionRateBp'),
-      read: percentCodec,
-      blank: { required: 'Enter the commission rate, such as 40.' },
-    },
-    vatRate: {
-      ...at('vatRateBp'),
-      read: percentCodec,
-      blank: { required: 'Enter the VAT rate, such as 20.' },
-    },
-    venueRole: { ...at('venueRole'), read: choiceCodec },
-    commissionVat: { ...at('commissionVat'), read: choiceCodec },
-    makerVatRegistered: { ...at('makerVatRegistered'), read: yesNoCodec },
-    discountRule: { ...at('discountRule'), read: choiceCodec },
-    insuranceBasis: { ...at('insuranceBasis'), read: choiceCodec },
-    agreedInsuranceValue: {
-      path: `${prefix}agreedInsuranceValue`,
-      // In the terms' own currency, and only when the basis is an agreed value.
-      read: (text, values) => moneyCodec(values.currency.trim().toUpperCase())(text),
-      when: (values) => sent() && values.insuranceBasis === 'agreed',
-      blank: 'omit',
-    },
-    insuredBy: { ...at('insuredBy'), read: choiceCodec },
-    insuredInTransitBy: { ...at('insuredInTransitBy'), read: choiceCodec },
-    paymentDays: { ...at('paymentTerms.days'), read: numberCodec },
-    paymentFrom: { ...at('paymentTerms.from'), read: choiceCodec },
-  };
-}
-
 function venueFields(withTerms: boolean): FieldBindings<VenueFormValues> {
   return {
     name: { read: textCodec, blank: { required: 'Enter the venue’s name.' } },
@@ -166,7 +82,7 @@ function venueFields(withTerms: boolean): FieldBindings<VenueFormValues> {
     phone: { read: textCodec },
     vatNumber: { read: textCodec },
     notes: { read: textCodec },
-    ...termsFields('defaultTerms.', () => withTerms),
+    ...termsFields<VenueFormValues>('defaultTerms.', () => withTerms),
   };
 }
 
@@ -182,16 +98,3 @@ export const venueUpdateBindings = {
   withTerms: bindForm<VenueFormValues, VenueUpdateParsed>(venueUpdateSchema, venueFields(true)),
   detailsOnly: bindForm<VenueFormValues, VenueUpdateParsed>(venueUpdateSchema, venueFields(false)),
 };
-
-const termsBinding = bindForm<TermsFormValues, Terms>(
-  termsSchema,
-  termsFields('', () => true),
-);
-
-/** Terms from the form for the net preview; null while something in them cannot be read. */
-export function previewTerms(values: TermsFormValues): Terms | null {
-  const { body, messages } = termsBinding.toBody(values);
-  if (Object.keys(messages).length > 0) return null;
-  const result = termsSchema.safeParse(body);
-  return result.success ? result.data : null;
-}

@@ -1,9 +1,10 @@
+import { FormProvider } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 
 import { Card } from '@/components/ui/card';
 import { FieldCell, FieldRow } from '@/components/ui/field-row';
 import { type FormBinding } from '@/components/ui/form/binding';
-import { FormChoice, FormMoney, FormNumber, FormText } from '@/components/ui/form/fields';
+import { FormChoice, FormText } from '@/components/ui/form/fields';
 import { useSchemaForm } from '@/components/ui/form/use-schema-form';
 import { FormFooter } from '@/components/ui/form-footer';
 import { Notice } from '@/components/ui/notice';
@@ -11,18 +12,10 @@ import { Heading, Text } from '@/components/ui/text';
 import { spacing } from '@/constants/theme';
 import { useBreakpoint } from '@/hooks/use-breakpoint';
 
-import { NetPreview } from './net-preview';
+import { NetPreview } from '../terms-form/net-preview';
+import { TermsFields } from '../terms-form/terms-fields';
 import { type VenueFormValues } from './venue-form-values';
-import {
-  commissionVatWords,
-  discountRuleWords,
-  insuranceBasisWords,
-  insurerWords,
-  options,
-  paymentFromWords,
-  venueKindWords,
-  venueRoleWords,
-} from './venue-words';
+import { options, venueKindWords } from './venue-words';
 
 type VenueFormProps<Parsed> = {
   defaultValues: VenueFormValues;
@@ -44,10 +37,9 @@ export function VenueForm<Parsed>({
   termsEditable,
 }: VenueFormProps<Parsed>) {
   const { wide } = useBreakpoint();
-  const { control, formState, submit, watch } = useSchemaForm(binding, defaultValues);
+  const form = useSchemaForm(binding, defaultValues);
+  const { control, formState, submit, watch } = form;
   const terms = watch();
-  const typed = terms.currency.trim().toUpperCase();
-  const currency = /^[A-Z]{3}$/.test(typed) ? typed : 'GBP';
   const field = { control } as const;
 
   const termsFields = !termsEditable ? (
@@ -59,234 +51,134 @@ export function VenueForm<Parsed>({
       />
     </Card>
   ) : (
-    <Card style={styles.section}>
-      <Heading level={2}>Default terms</Heading>
-      <Text variant="small">
-        Copied onto each consignment when it is agreed; change them there if a show differs.
-      </Text>
-      <FieldRow>
-        <FieldCell basis={140}>
-          <FormNumber
-            {...field}
-            name="commissionRate"
-            testID="venue-commissionRate"
-            unit="%"
-            decimal
-            label="Commission"
-          />
-        </FieldCell>
-        <FieldCell basis={140}>
-          <FormNumber
-            {...field}
-            name="vatRate"
-            testID="venue-vatRate"
-            unit="%"
-            decimal
-            label="VAT rate"
-          />
-        </FieldCell>
-        <FieldCell basis={120}>
-          <FormText
-            {...field}
-            name="currency"
-            testID="venue-currency"
-            label="Currency"
-            autoCapitalize="characters"
-            maxLength={3}
-          />
-        </FieldCell>
-      </FieldRow>
-      <FormChoice
-        {...field}
-        name="venueRole"
-        testID="venue-venueRole"
-        label="The venue"
-        options={options(venueRoleWords)}
-      />
-      <FormChoice
-        {...field}
-        name="commissionVat"
-        testID="venue-commissionVat"
-        label="VAT on the commission"
-        options={options(commissionVatWords)}
-      />
-      <FormChoice
-        {...field}
-        name="makerVatRegistered"
-        testID="venue-makerVatRegistered"
-        label="Are you VAT-registered?"
-        options={[
-          { value: 'no', label: 'No' },
-          { value: 'yes', label: 'Yes' },
-        ]}
-      />
-      <FormChoice
-        {...field}
-        name="discountRule"
-        testID="venue-discountRule"
-        label="Who bears a discount"
-        options={options(discountRuleWords)}
-      />
-      <FormChoice
-        {...field}
-        name="insuranceBasis"
-        testID="venue-insuranceBasis"
-        label="Insured at"
-        options={options(insuranceBasisWords)}
-      />
-      {terms.insuranceBasis === 'agreed' ? (
-        <FormMoney
-          {...field}
-          name="agreedInsuranceValue"
-          testID="venue-agreedInsuranceValue"
-          label="Agreed insurance value"
-          currency={currency}
-        />
-      ) : null}
-      <FormChoice
-        {...field}
-        name="insuredBy"
-        testID="venue-insuredBy"
-        label="Who insures on the premises"
-        options={options(insurerWords)}
-      />
-      <FormChoice
-        {...field}
-        name="insuredInTransitBy"
-        testID="venue-insuredInTransitBy"
-        label="Who insures in transit"
-        options={options(insurerWords)}
-      />
-      <FieldRow>
-        <FieldCell basis={140}>
-          <FormNumber
-            {...field}
-            name="paymentDays"
-            testID="venue-paymentDays"
-            label="Payment within"
-            unit="days"
-          />
-        </FieldCell>
-      </FieldRow>
-      <FormChoice
-        {...field}
-        name="paymentFrom"
-        testID="venue-paymentFrom"
-        label="Counted from"
-        options={options(paymentFromWords)}
-      />
-    </Card>
+    <TermsFields
+      heading="Default terms"
+      testIDPrefix="venue"
+      intro={
+        <Text variant="small">
+          Copied onto each consignment when it is agreed; change them there if a show differs.
+        </Text>
+      }
+    />
   );
 
   return (
-    <View role="form" aria-label={label} style={styles.form}>
-      <Card style={styles.section}>
-        <Heading level={2}>The venue</Heading>
-        <FormText {...field} name="name" testID="venue-name" label="Name" />
-        <FormChoice
-          {...field}
-          name="kind"
-          testID="venue-kind"
-          label="Kind"
-          options={options(venueKindWords)}
-        />
-        <FieldRow>
-          <FieldCell>
-            <FormText
-              {...field}
-              name="contactName"
-              testID="venue-contactName"
-              label="Contact name (optional)"
-            />
-          </FieldCell>
-          <FieldCell>
-            <FormText
-              {...field}
-              name="email"
-              testID="venue-email"
-              label="E-mail (optional)"
-              inputMode="email"
-              autoCapitalize="none"
-              autoCorrect={false}
-            />
-          </FieldCell>
-          <FieldCell>
-            <FormText
-              {...field}
-              name="phone"
-              testID="venue-phone"
-              label="Phone (optional)"
-              inputMode="tel"
-            />
-          </FieldCell>
-        </FieldRow>
-        <FormText
-          {...field}
-          name="addressLine1"
-          testID="venue-addressLine1"
-          label="Address (optional)"
-        />
-        <FormText
-          {...field}
-          name="addressLine2"
-          testID="venue-addressLine2"
-          label="Address, second line (optional)"
-        />
-        <FieldRow>
-          <FieldCell>
-            <FormText {...field} name="town" testID="venue-town" label="Town (optional)" />
-          </FieldCell>
-          <FieldCell basis={140}>
-            <FormText
-              {...field}
-              name="postcode"
-              testID="venue-postcode"
-              label="Postcode (optional)"
-              autoCapitalize="characters"
-            />
-          </FieldCell>
-          <FieldCell basis={120}>
-            <FormText
-              {...field}
-              name="country"
-              testID="venue-country"
-              label="Country"
-              hint="Two letters, e.g. GB"
-              autoCapitalize="characters"
-              maxLength={2}
-            />
-          </FieldCell>
-        </FieldRow>
-        <FormText
-          {...field}
-          name="vatNumber"
-          testID="venue-vatNumber"
-          label="Venue’s VAT number (optional)"
-          autoCapitalize="characters"
-        />
-      </Card>
+    <FormProvider {...form}>
+      <View role="form" aria-label={label} style={styles.form}>
+        <Card style={styles.section}>
+          <Heading level={2}>The venue</Heading>
+          <FormText {...field} name="name" testID="venue-name" label="Name" />
+          <FormChoice
+            {...field}
+            name="kind"
+            testID="venue-kind"
+            label="Kind"
+            options={options(venueKindWords)}
+          />
+          <FieldRow>
+            <FieldCell>
+              <FormText
+                {...field}
+                name="contactName"
+                testID="venue-contactName"
+                label="Contact name (optional)"
+              />
+            </FieldCell>
+            <FieldCell>
+              <FormText
+                {...field}
+                name="email"
+                testID="venue-email"
+                label="E-mail (optional)"
+                inputMode="email"
+                autoCapitalize="none"
+                autoCorrect={false}
+              />
+            </FieldCell>
+            <FieldCell>
+              <FormText
+                {...field}
+                name="phone"
+                testID="venue-phone"
+                label="Phone (optional)"
+                inputMode="tel"
+              />
+            </FieldCell>
+          </FieldRow>
+          <FormText
+            {...field}
+            name="addressLine1"
+            testID="venue-addressLine1"
+            label="Address (optional)"
+          />
+          <FormText
+            {...field}
+            name="addressLine2"
+            testID="venue-addressLine2"
+            label="Address, second line (optional)"
+          />
+          <FieldRow>
+            <FieldCell>
+              <FormText {...field} name="town" testID="venue-town" label="Town (optional)" />
+            </FieldCell>
+            <FieldCell basis={140}>
+              <FormText
+                {...field}
+                name="postcode"
+                testID="venue-postcode"
+                label="Postcode (optional)"
+                autoCapitalize="characters"
+              />
+            </FieldCell>
+            <FieldCell basis={120}>
+              <FormText
+                {...field}
+                name="country"
+                testID="venue-country"
+                label="Country"
+                hint="Two letters, e.g. GB"
+                autoCapitalize="characters"
+                maxLength={2}
+              />
+            </FieldCell>
+          </FieldRow>
+          <FormText
+            {...field}
+            name="vatNumber"
+            testID="venue-vatNumber"
+            label="Venue’s VAT number (optional)"
+            autoCapitalize="characters"
+          />
+        </Card>
 
-      <View style={[styles.terms, wide && styles.termsWide]}>
-        <View style={styles.termsFields}>{termsFields}</View>
-        <View style={[styles.preview, wide && styles.previewWide]}>
-          <NetPreview values={terms} />
+        <View style={[styles.terms, wide && styles.termsWide]}>
+          <View style={styles.termsFields}>{termsFields}</View>
+          <View style={[styles.preview, wide && styles.previewWide]}>
+            <NetPreview values={terms} />
+          </View>
         </View>
+
+        <Card style={styles.section}>
+          <Heading level={2}>Notes</Heading>
+          <FormText
+            {...field}
+            name="notes"
+            testID="venue-notes"
+            label="Notes (optional)"
+            multiline
+          />
+        </Card>
+
+        <FormFooter
+          name="venue"
+          errors={formState.errors}
+          submitLabel={submitLabel}
+          busyLabel="Saving…"
+          busy={formState.isSubmitting}
+          onSubmit={submit(onSubmit)}
+        />
       </View>
-
-      <Card style={styles.section}>
-        <Heading level={2}>Notes</Heading>
-        <FormText {...field} name="notes" testID="venue-notes" label="Notes (optional)" multiline />
-      </Card>
-
-      <FormFooter
-        name="venue"
-        errors={formState.errors}
-        submitLabel={submitLabel}
-        busyLabel="Saving…"
-        busy={formState.isSubmitting}
-        onSubmit={submit(onSubmit)}
-      />
-    </View>
+    </FormProvider>
   );
 }
 

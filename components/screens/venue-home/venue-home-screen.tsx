@@ -30,7 +30,15 @@ export function VenueHomeScreen() {
               />
             ) : (
               query.data.consignments.map((consignment) => (
-                <ConsignmentCard key={consignment.id} consignment={consignment} showVenue={false} />
+                <ConsignmentCard
+                  key={consignment.id}
+                  consignment={consignment}
+                  showVenue={false}
+                  href={{
+                    pathname: '/venue/consignments/[id]',
+                    params: { id: String(consignment.id) },
+                  }}
+                />
               ))
             )}
           </View>

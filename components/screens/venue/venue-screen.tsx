@@ -104,7 +104,14 @@ function VenueBody({ detail }: { detail: VenueDetail }) {
             message={`Batches of work sent to ${venue.name} are listed here, with how each is going.`}
           />
         ) : (
-          consignments.map((c) => <ConsignmentCard key={c.id} consignment={c} showVenue={false} />)
+          consignments.map((c) => (
+            <ConsignmentCard
+              key={c.id}
+              consignment={c}
+              showVenue={false}
+              href={{ pathname: '/consignments/[id]', params: { id: String(c.id) } }}
+            />
+          ))
         )}
       </View>
       <View style={styles.section}>

@@ -11,9 +11,9 @@ import { FormFooter } from '@/components/ui/form-footer';
 import { Heading, Text } from '@/components/ui/text';
 import { spacing } from '@/constants/theme';
 import { type FoodUse } from '@/shared/schemas/work';
+import { foodSafeNote } from '@/shared/works/food-use';
 
 import { ConeHint } from './cone-hint';
-import { foodSafeNote } from './food-use-note';
 import { type WorkFormValues } from './work-form-values';
 
 const foodUseOptions: { value: FoodUse; label: string }[] = [

@@ -15,8 +15,8 @@ import { useWorkQuery } from '@/hooks/queries/works';
 import { nearestCone } from '@/shared/firing/cones';
 import { formatMoney } from '@/shared/money/format';
 import { heavyWeightG, type Work } from '@/shared/schemas/work';
+import { foodSafeNote, foodUseWords } from '@/shared/works/food-use';
 
-import { foodSafeNote, foodUseWords } from '../work-form/food-use-note';
 import { WorkActions } from './work-actions';
 import { WorkHistory } from './work-history';
 import { WorkPhotos } from './work-photos';

@@ -9,6 +9,7 @@ import { Choice, type ChoiceOption } from '../choice';
 import { DateField } from '../date-field';
 import { MoneyField } from '../money-field';
 import { NumberField } from '../number-field';
+import { Select, type SelectOption } from '../select';
 import { TextField, type TextFieldProps } from '../text-field';
 
 /** What every bound field takes: the form's control and the name of a field holding text. */
@@ -74,6 +75,26 @@ export function FormNumber<Values extends FieldValues, Body>({
 export function FormDate<Values extends FieldValues, Body>(props: Bound<Values, Body>) {
   const { label, testID, hint, value, onChangeText, onBlur, error } = useBoundText(props);
   return <DateField {...{ label, testID, hint, value, onBlur, error }} onChange={onChangeText} />;
+}
+
+/** One of many choices, in a drop-down (the browser's own on the web). */
+export function FormSelect<Values extends FieldValues, Body>({
+  options,
+  emptyLabel,
+  ...props
+}: Bound<Values, Body> & { options: readonly SelectOption[]; emptyLabel?: string }) {
+  const { field, fieldState } = useController({ control: props.control, name: props.name });
+  return (
+    <Select
+      testID={props.testID}
+      label={props.label}
+      options={options}
+      emptyLabel={emptyLabel}
+      value={field.value as string}
+      onChange={field.onChange}
+      error={fieldState.error?.message}
+    />
+  );
 }
 
 /** One of a few choices, all in view. */

@@ -21,6 +21,7 @@ export const protectedRoutes: {
   { route: 'POST /api/auth/sign-out', roles: ['owner', 'assistant', 'gallery'] },
   { route: 'GET /api/overview', roles: ['owner', 'assistant'] },
   { route: 'GET /api/venue/consignments', roles: ['gallery'] },
+  { route: 'GET /api/venue/lines/:lineId', roles: ['gallery'] },
   { route: 'POST /api/quotes/split', roles: ['owner', 'assistant'] },
   { route: 'POST /api/quotes/price-plan', roles: ['owner', 'assistant'] },
   { route: 'GET /api/works', roles: ['owner', 'assistant'] },

@@ -10,7 +10,7 @@ import { formatMoney } from '@/shared/money/format';
 import { makerNet, trySplitSale, venueKeeps } from '@/shared/money/split';
 import { type Money } from '@/shared/schemas/money';
 
-import { previewTerms, type TermsFormValues } from './venue-form-values';
+import { previewTerms, type TermsFormValues } from './terms-form-values';
 
 function Line({
   label,
