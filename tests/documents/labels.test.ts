@@ -1,33 +1,10 @@
-import jsQR from 'jsqr';
-import sharp from 'sharp';
-
-import { labelSheet, renderLabels } from '@/documents/labels';
+import { renderLabels } from '@/documents/labels';
 import { formatMoney } from '@/shared/money/format';
 import { type LabelsData } from '@/shared/schemas/documents';
 
 import { labelsData } from './helpers/fixtures';
 import { pdfInfo, pdfPagePng, pdfPages, requirePoppler, squash } from './helpers/pdf';
-
-const dpi = 200;
-const px = (points: number) => Math.round((points * dpi) / 72);
-
-/** What a phone's reader would find in the QR code of one label on a page printed at 200 dpi. */
-async function readQrCode(page: Buffer, slot: number): Promise<string | undefined> {
-  const { x, y } = labelSheet.origin(slot);
-  const { dx, dy, size } = labelSheet.qrBox;
-  const margin = 6;
-  const { data, info } = await sharp(page)
-    .extract({
-      left: px(x + dx) - margin,
-      top: px(y + dy) - margin,
-      width: px(size) + 2 * margin,
-      height: px(size) + 2 * margin,
-    })
-    .ensureAlpha()
-    .raw()
-    .toBuffer({ resolveWithObject: true });
-  return jsQR(new Uint8ClampedArray(data), info.width, info.height)?.data;
-}
+import { qrReadingDpi, readQrCode } from './helpers/qr';
 
 describe('renderLabels', () => {
   let data: LabelsData;
@@ -53,8 +30,8 @@ describe('renderLabels', () => {
   // ISO/IEC 18004 (QR Code) symbols, read back by jsQR, an independent decoder, from the page
   // as pdftoppm rasterises it.
   it('draws QR codes that a reader decodes to each piece’s address (ISO/IEC 18004)', async () => {
-    const first = pdfPagePng(pdf, 1, dpi);
-    const second = pdfPagePng(pdf, 2, dpi);
+    const first = pdfPagePng(pdf, 1, qrReadingDpi);
+    const second = pdfPagePng(pdf, 2, qrReadingDpi);
     const read = await Promise.all([
       ...Array.from({ length: 10 }, (_, slot) => readQrCode(first, slot)),
       ...Array.from({ length: 4 }, (_, slot) => readQrCode(second, slot)),

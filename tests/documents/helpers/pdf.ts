@@ -1,5 +1,5 @@
-// Reads rendered PDFs back with Debian's poppler-utils (pdftotext, pdfinfo, pdftoppm), so the
-// checks see what a reader sees, not what the renderer meant to write.
+// Reads rendered PDFs back with Debian's poppler-utils (pdftotext, pdfinfo, pdftoppm, pdfimages),
+// so the checks see what a reader sees, not what the renderer meant to write.
 import { execFileSync, spawnSync } from 'node:child_process';
 import fs from 'node:fs';
 import os from 'node:os';
@@ -7,7 +7,7 @@ import path from 'node:path';
 
 /** Fails with the command to run when poppler-utils is missing, instead of a spawn error. */
 export function requirePoppler(): void {
-  for (const tool of ['pdftotext', 'pdftoppm', 'pdfinfo']) {
+  for (const tool of ['pdftotext', 'pdftoppm', 'pdfinfo', 'pdfimages']) {
     const probe = spawnSync(tool, ['-v'], { encoding: 'utf8' });
     if (probe.error) {
       throw new Error(
@@ -64,6 +64,27 @@ export function pdfPagePng(pdf: Buffer, page: number, dpi: number): Buffer {
       prefix,
     ]);
     return fs.readFileSync(`${prefix}.png`);
+  } finally {
+    fs.rmSync(dir, { recursive: true, force: true });
+  }
+}
+
+/** The pictures placed in the PDF, page by page, as `pdfimages -list` reads them. */
+export function pdfImages(pdf: Buffer): { page: number; width: number; height: number }[] {
+  const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'saggar-pdf-'));
+  try {
+    const file = path.join(dir, 'in.pdf');
+    fs.writeFileSync(file, pdf);
+    const text = execFileSync('pdfimages', ['-list', file], { encoding: 'utf8' });
+    // Two heading lines, then one row per image: page, num, type, width, height, …
+    return text
+      .split('\n')
+      .slice(2)
+      .filter((line) => line.trim() !== '')
+      .map((line) => {
+        const [page, , , width, height] = line.trim().split(/\s+/);
+        return { page: Number(page), width: Number(width), height: Number(height) };
+      });
   } finally {
     fs.rmSync(dir, { recursive: true, force: true });
   }
