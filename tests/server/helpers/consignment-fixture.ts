@@ -38,8 +38,8 @@ export const galleryTerms: Terms = {
 };
 
 /** The studio fixture, with venue A on the gallery terms above and an e-mail to write to. */
-export async function consignmentFixture() {
-  const f = await studioFixture();
+export async function consignmentFixture(options: Parameters<typeof studioFixture>[0] = {}) {
+  const f = await studioFixture(options);
   await f.db
     .updateTable('venues')
     .set({ default_terms: JSON.stringify(galleryTerms), email: 'desk@gallery-a.example' })
