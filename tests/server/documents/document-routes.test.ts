@@ -25,7 +25,7 @@ import {
 } from '../helpers/document-fixture';
 import { getBytes } from '../helpers/mail';
 import { picture } from '../helpers/pictures';
-import { addPerson, addVenue, signIn } from '../helpers/test-app';
+import { addConsignment, addPerson, addVenue, signIn } from '../helpers/test-app';
 
 // pdftotext, pdfinfo, pdfimages and pdftoppm from Debian's poppler-utils read the files back.
 beforeAll(requirePoppler);
@@ -281,7 +281,7 @@ describe('GET /api/consignments/:id/{sheet,condition-report,labels}.pdf', () => 
   });
 
   describe('who may have them', () => {
-    it('answers 404 to another studio and to the staff of another venue', async () => {
+    it('answers 404 to another studio’s owner and to the staff of another venue', async () => {
       const stranger = await otherVenueStaff(f);
       for (const cookie of [stranger, await f.cookie('otherOwner')]) {
         for (const document of documents) {
@@ -294,10 +294,18 @@ describe('GET /api/consignments/:id/{sheet,condition-report,labels}.pdf', () => 
       }
     });
 
-    it('answers 404 for a consignment that does not exist', async () => {
-      const res = await as(f, 'owner').get('/api/consignments/9999/sheet.pdf');
-      expect(res.status).toBe(404);
-      expect(res.body).toEqual(notFound);
+    it('answers 404 for another studio’s consignment and for one that does not exist', async () => {
+      const theirs = await addConsignment(f.db, f.studioB, f.venueB, 'B-1');
+      for (const id of [theirs, 9999]) {
+        for (const document of documents) {
+          const res = await as(f, 'owner').get(`/api/consignments/${id}/${document.path}`);
+          expect(res.status).toBe(404);
+          expect(res.body).toEqual(notFound);
+        }
+      }
+      // Studio B's owner does get it: the 404 above is the scope, not a broken consignment.
+      const own = await as(f, 'otherOwner').get(`/api/consignments/${theirs}/sheet.pdf`);
+      expect(own.status).toBe(200);
     });
 
     it('answers 400 with the issues for an id that is not a number', async () => {
