@@ -2,8 +2,17 @@ import { type Href } from 'expo-router';
 
 import { type Role } from '@/shared/schemas/membership';
 
-/** A section; `roles` narrows who sees it (the server refuses the rest anyway). */
-export type NavItem = { key: string; label: string; href: Href; roles?: readonly Role[] };
+/**
+ * A section; `roles` narrows who sees it (the server refuses the rest anyway). `inBar: false`
+ * keeps it out of a phone's bottom bar, where it is one tap further, under More.
+ */
+export type NavItem = {
+  key: string;
+  label: string;
+  href: Href;
+  roles?: readonly Role[];
+  inBar?: boolean;
+};
 
 /** The studio side's sections, in the order the navigation shows them. */
 export const studioNav: readonly NavItem[] = [
@@ -11,9 +20,22 @@ export const studioNav: readonly NavItem[] = [
   { key: 'works', label: 'Works', href: '/works' },
   { key: 'consignments', label: 'Consignments', href: '/consignments' },
   { key: 'venues', label: 'Venues', href: '/venues' },
-  { key: 'mail', label: 'Sent mail', href: '/mail', roles: ['owner'] },
-  { key: 'settings', label: 'Settings', href: '/settings' },
+  { key: 'mail', label: 'Sent mail', href: '/mail', roles: ['owner'], inBar: false },
+  { key: 'settings', label: 'Settings', href: '/settings', inBar: false },
 ];
+
+/** On a phone, the bottom bar's last entry: the page listing the sections left out of it. */
+export const moreNavItem: NavItem = { key: 'more', label: 'More', href: '/more' };
+
+/** A phone's bottom bar: the sections that fit, then More when some do not. */
+export function barFor(items: readonly NavItem[]): NavItem[] {
+  const inBar = items.filter((item) => item.inBar !== false);
+  return inBar.length === items.length ? inBar : [...inBar, moreNavItem];
+}
+
+/** The sections under More. */
+export const underMore = (items: readonly NavItem[]) =>
+  items.filter((item) => item.inBar === false);
 
 /** The sections a role sees. */
 export function navFor(items: readonly NavItem[], role: Role): NavItem[] {

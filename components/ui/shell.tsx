@@ -2,7 +2,7 @@ import { Link, usePathname } from 'expo-router';
 import { type ReactNode } from 'react';
 import { Pressable, type PressableProps, StyleSheet, View } from 'react-native';
 
-import { type NavItem } from '@/constants/navigation';
+import { barFor, moreNavItem, type NavItem, underMore } from '@/constants/navigation';
 import { palette, radii, spacing, touchTarget } from '@/constants/theme';
 import { errorMessage } from '@/hooks/api-errors';
 import { useSignOutMutation } from '@/hooks/session';
@@ -28,6 +28,12 @@ function isCurrent(pathname: string, href: NavItem['href']): boolean {
   return target === '/'
     ? pathname === '/'
     : pathname === target || pathname.startsWith(`${target}/`);
+}
+
+/** In the bottom bar, More stands for the sections under it. */
+function isCurrentInBar(pathname: string, item: NavItem, nav: readonly NavItem[]): boolean {
+  if (item.key !== moreNavItem.key) return isCurrent(pathname, item.href);
+  return [item, ...underMore(nav)].some((under) => isCurrent(pathname, under.href));
 }
 
 type NavPressableProps = Omit<PressableProps, 'style' | 'children'> & {
@@ -61,7 +67,9 @@ function NavPressable({ item, current, layout, ...props }: NavPressableProps) {
         testID={current ? `nav-${item.key}-current` : undefined}
         style={[layout === 'side' ? styles.sideBar : styles.tabBarMark, current && styles.markOn]}
       />
-      <Text variant={current ? 'bodyStrong' : 'body'}>{item.label}</Text>
+      <Text variant={current ? 'bodyStrong' : 'body'} numberOfLines={1}>
+        {item.label}
+      </Text>
     </Pressable>
   );
 }
@@ -105,11 +113,11 @@ export function Shell({ nav, me, membership, children }: ShellProps) {
     </Link>
   ) : null;
   const problem = signOut.isError ? <Notice message={errorMessage(signOut.error)} /> : null;
-  const links = nav.map((item) => (
+  const links = (wide ? nav : barFor(nav)).map((item) => (
     <NavLink
       key={item.key}
       item={item}
-      current={isCurrent(pathname, item.href)}
+      current={wide ? isCurrent(pathname, item.href) : isCurrentInBar(pathname, item, nav)}
       layout={wide ? 'side' : 'tab'}
     />
   ));
@@ -206,8 +214,12 @@ const styles = StyleSheet.create({
     borderTopWidth: 1,
     borderTopColor: palette.hairline,
   },
+  // Each entry as wide as its word needs, the room left shared out: "Consignments" fits at 390 px.
   tabLink: {
-    flex: 1,
+    flexGrow: 1,
+    flexShrink: 1,
+    flexBasis: 'auto',
+    paddingHorizontal: spacing.xs,
     minHeight: 56,
     alignItems: 'center',
     justifyContent: 'center',

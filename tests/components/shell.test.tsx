@@ -32,7 +32,7 @@ function setWidth(width: number) {
   });
 }
 
-function renderShell() {
+function renderShell(initialUrl = '/') {
   const membership = me.memberships[0]!;
   return renderRouter(
     {
@@ -44,8 +44,9 @@ function renderShell() {
         </TestQueryProvider>
       ),
       index: () => <Text>Overview body</Text>,
+      settings: () => <Text>Settings body</Text>,
     },
-    { initialUrl: '/' },
+    { initialUrl },
   );
 }
 
@@ -62,6 +63,16 @@ describe('Shell', () => {
     expect(screen.getByText('Overview body')).toBeTruthy();
   });
 
+  it('keeps Sent mail and Settings under More on a phone, and marks More while one is open', () => {
+    setWidth(390);
+    renderShell('/settings');
+    const bar = ['nav-overview', 'nav-works', 'nav-consignments', 'nav-venues', 'nav-more'];
+    for (const id of bar) expect(screen.getByTestId(id)).toBeTruthy();
+    expect(screen.queryByTestId('nav-mail')).toBeNull();
+    expect(screen.queryByTestId('nav-settings')).toBeNull();
+    expect(screen.getByTestId('nav-more-current')).toBeTruthy();
+  });
+
   it('shows a side navigation from 768 px wide', () => {
     setWidth(768);
     renderShell();
@@ -69,6 +80,9 @@ describe('Shell', () => {
     expect(screen.getByTestId('side-nav')).toBeTruthy();
     expect(screen.queryByTestId('bottom-bar')).toBeNull();
     expect(screen.getByTestId('nav-overview')).toHaveTextContent('Overview');
+    // Wide, every section has its own entry.
+    expect(screen.getByTestId('nav-settings')).toHaveTextContent('Settings');
+    expect(screen.queryByTestId('nav-more')).toBeNull();
     expect(screen.getByText('Ada Potter')).toBeTruthy();
   });
 

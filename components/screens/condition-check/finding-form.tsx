@@ -135,7 +135,7 @@ export function FindingForm({
         ) : null}
         <Button
           testID={`${testID}-photo`}
-          label={photo ? 'Another photo' : 'Add a photo'}
+          label={photo ? 'Change the photo' : 'Add a photo'}
           busyLabel="Sending the photo…"
           busy={upload.isPending}
           variant="secondary"

@@ -34,6 +34,7 @@ export const ConsignmentCreateScreen = lazyScreen(
 export const ConsignmentsScreen = lazyScreen(
   async () => (await loadStudioScreens()).ConsignmentsScreen,
 );
+export const MoreScreen = lazyScreen(async () => (await loadStudioScreens()).MoreScreen);
 export const OverviewScreen = lazyScreen(async () => (await loadStudioScreens()).OverviewScreen);
 export const SettingsScreen = lazyScreen(async () => (await loadStudioScreens()).SettingsScreen);
 export const VenueScreen = lazyScreen(async () => (await loadStudioScreens()).VenueScreen);

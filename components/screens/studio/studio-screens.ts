@@ -5,6 +5,7 @@ export { ConsignmentCreateScreen } from '../consignment-form/consignment-create-
 export { ConsignmentsScreen } from '../consignments/consignments-screen';
 export { MailScreen } from '../mail/mail-screen';
 export { MailMessageScreen } from '../mail/message-screen';
+export { MoreScreen } from '../more/more-screen';
 export { OverviewScreen } from '../overview/overview-screen';
 export { SettingsScreen } from '../settings/settings-screen';
 export { VenueScreen } from '../venue/venue-screen';
