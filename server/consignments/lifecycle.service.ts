@@ -81,7 +81,9 @@ export async function dispatchConsignment(
       );
     }
     const studio = await getStudio(trx, scope);
-    const dispatchDate = row.dispatch_date ?? isoDateInTimeZone(new Date(), studio.time_zone);
+    // The day it actually goes, in the studio's time zone: the planned date gives way to it, as
+    // sales count from it.
+    const dispatchDate = isoDateInTimeZone(new Date(), studio.time_zone);
     const dispatchedAt = new Date().toISOString();
     const changed = await updateConsignmentIn(trx, scope, id, ['agreed'], {
       state: 'dispatched',
@@ -107,7 +109,7 @@ export async function dispatchConsignment(
       action: 'consignment.dispatched',
       entity: 'consignment',
       entityId: id,
-      before: { state: 'agreed' },
+      before: { state: 'agreed', dispatchDate: row.dispatch_date },
       after: {
         state: 'dispatched',
         dispatchDate,

@@ -40,9 +40,9 @@ export function materialsOf(piece: PieceRow): string {
   const firing = piece.firing_temp_c
     ? `${piece.firing_temp_c} °C${piece.atmosphere ? ` ${piece.atmosphere.toLowerCase()}` : ''}`
     : null;
-  return [piece.clay_body, piece.glaze ? `${piece.glaze} glaze` : null, firing]
-    .filter(Boolean)
-    .join(', ');
+  const glaze =
+    piece.glaze && !/\bglaze\b/i.test(piece.glaze) ? `${piece.glaze} glaze` : piece.glaze;
+  return [piece.clay_body, glaze, firing].filter(Boolean).join(', ');
 }
 
 /** Height × width × depth in millimetres, leaving out what was not measured. */

@@ -10,7 +10,7 @@ import { mailLayout } from '@/server/mail/templates/layout';
 
 import { expectAccessible, newPage, problemsOf, screenshot } from './helpers/browser';
 import { withServerAndBrowser } from './helpers/setup';
-import { signInToStudio } from './helpers/studio';
+import { openSection, signInToStudio } from './helpers/studio';
 
 const env = withServerAndBrowser();
 const [maker, assistant] = demoSignIns.people;
@@ -75,7 +75,7 @@ async function writeFailedMessages(dbFile: string) {
 const outsideTheMessage = { exclude: ['[data-testid="message-body-html"]'] };
 
 async function openMail(page: Page) {
-  await page.getByTestId('nav-mail').click();
+  await openSection(page, 'mail');
   await page.getByTestId('mail-screen').waitFor();
 }
 

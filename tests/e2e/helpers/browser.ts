@@ -50,6 +50,12 @@ export const problemsOf = (page: Page) => (page as Page & { problems: string[] }
 
 export async function screenshot(page: Page, name: string): Promise<void> {
   fs.mkdirSync(screenshotDir, { recursive: true });
+  // Pictures still on their way would be empty squares in the picture of the page.
+  await page
+    .waitForFunction(() => Array.from(document.images).every((image) => image.complete), null, {
+      timeout: 5_000,
+    })
+    .catch(() => undefined);
   await page.screenshot({ path: path.join(screenshotDir, `${name}.png`), fullPage: true });
 }
 

@@ -34,3 +34,14 @@ export async function makeImage(format: 'png' | 'jpeg', colour: [number, number,
   const image = sharp(pixels, { raw: { width, height, channels: 3 } });
   return format === 'png' ? image.png().toBuffer() : image.jpeg({ quality: 85 }).toBuffer();
 }
+
+/** Opens a section from the navigation: on a phone, through More when the bar has no room. */
+export async function openSection(page: Page, key: string) {
+  const direct = page.getByTestId(`nav-${key}`);
+  if (await direct.isVisible()) {
+    await direct.click();
+    return;
+  }
+  await page.getByTestId('nav-more').click();
+  await page.getByTestId(`more-${key}`).click();
+}

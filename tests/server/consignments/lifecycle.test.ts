@@ -1,3 +1,5 @@
+import { isoDateInTimeZone } from '@/shared/money';
+
 import {
   as,
   consignmentFixture,
@@ -158,7 +160,8 @@ describe('POST /api/consignments/:id/dispatch', () => {
     const sent = await dispatchedWith(f, [f.works[0]!, f.works[1]!]);
     const res = await as(f, 'owner').get(`/api/consignments/${sent.id}`);
     expect(res.body).toMatchObject({ state: 'dispatched', dispatchedAt: expect.any(String) });
-    expect(res.body.dispatchDate).toMatch(/^\d{4}-\d{2}-\d{2}$/);
+    // The day it went, in the studio's time zone, whatever date was planned.
+    expect(res.body.dispatchDate).toBe(isoDateInTimeZone(new Date(), 'Europe/London'));
     // Insured at the maker's net: £60.00 + £144.00 (common practice; docs/money-rules.md).
     expect(res.body.insuredOut).toEqual(gbp(20_400));
     const work = await as(f, 'owner').get(`/api/works/${f.works[0]}`);
