@@ -7,6 +7,7 @@ import { type Db } from './db/database';
 import { documentAttachmentKinds } from './documents/document-attachments';
 import { type AttachmentRenderer, attachmentRenderer } from './mail/attachments';
 import { defaultMailFrom } from './mail/transport';
+import { photoAttachmentKinds } from './photos/photo-attachments';
 
 /** Everything the app needs from outside, so tests can build it over an in-memory database. */
 export type AppContext = {
@@ -68,9 +69,10 @@ export function createContext(options: ContextOptions): AppContext {
     signInLimit: { perAccount: 10, perAddress: 50, windowMs: 15 * 60 * 1000 },
     trustProxy: false,
     mailFrom: defaultMailFrom,
-    renderAttachment: attachmentRenderer(
-      documentAttachmentKinds({ filesDir: options.filesDir, appUrl }),
-    ),
+    renderAttachment: attachmentRenderer({
+      ...documentAttachmentKinds({ filesDir: options.filesDir, appUrl }),
+      ...photoAttachmentKinds({ filesDir: options.filesDir }),
+    }),
     ...rest,
     publicUrl,
     appUrl,

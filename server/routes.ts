@@ -16,6 +16,7 @@ import { meRouter } from './me/me.router';
 import { overviewRouter } from './overview/overview.router';
 import { photoFilesRouter, workPhotosRouter } from './photos/photos.router';
 import { quotesRouter } from './quotes/quotes.router';
+import { consignmentSalesRouter, lineSalesRouter } from './sales/sales.router';
 import { studioRouter } from './studio/studio.router';
 import { venueHomeRouter } from './venue-home/venue-home.router';
 import { venuesRouter } from './venues/venues.router';
@@ -49,7 +50,9 @@ export function mountApi(app: Express, context: AppContext): void {
   app.use('/api/works', worksRouter(context));
   app.use('/api/photos', photoFilesRouter(context));
   app.use('/api/consignments', documentsRouter(context));
+  app.use('/api/consignments/:id/sales', consignmentSalesRouter(context));
   app.use('/api/consignments', consignmentsRouter(context));
+  app.use('/api/consignment-lines/:lineId', lineSalesRouter(context));
   app.use('/api/consignment-lines/:lineId/condition-reports', conditionReportsRouter(context));
   app.use('/api/condition-photos', conditionPhotosRouter(context));
   app.use('/api/invitations', invitationsRouter(context));

@@ -1,7 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
 
 import { venuePieceSchema } from '@/shared/schemas/consignment';
-import { venueHomeSchema } from '@/shared/schemas/overview';
+import { venueHomeSchema } from '@/shared/schemas/venue-side';
 
 import { apiRequest } from '../api-client';
 import { staleTimes } from '../query-config';

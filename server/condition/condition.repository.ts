@@ -145,8 +145,15 @@ export async function findConditionPhoto(db: Db, scope: Scope, fileId: number) {
       .conditionReports(db, scope)
       .innerJoin('condition_findings', 'condition_findings.report_id', 'condition_reports.id')
       .select('condition_findings.photo_file_id');
+    const visibleResolutions = scoped
+      .consignmentLines(db, scope)
+      .select('consignment_lines.resolution_photo_id');
     q = q.where((eb) =>
-      eb.or([eb('files.created_by', '=', scope.userId), eb('files.id', 'in', visibleFindings)]),
+      eb.or([
+        eb('files.created_by', '=', scope.userId),
+        eb('files.id', 'in', visibleFindings),
+        eb('files.id', 'in', visibleResolutions),
+      ]),
     );
   }
   return q.executeTakeFirst();

@@ -134,6 +134,8 @@ export async function listLineRows(db: Db, scope: Scope, consignmentId: number) 
     .leftJoin('work_photos as cover', (join) =>
       join.onRef('cover.work_id', '=', 'works.id').on('cover.position', '=', 0),
     )
+    .leftJoin('users as seller', 'seller.id', 'consignment_lines.sale_recorded_by')
+    .leftJoin('users as resolver', 'resolver.id', 'consignment_lines.resolved_by')
     .select([
       'consignment_lines.id',
       'consignment_lines.work_id',
@@ -143,6 +145,15 @@ export async function listLineRows(db: Db, scope: Scope, consignmentId: number) 
       'consignment_lines.state',
       'consignment_lines.sold_on',
       'consignment_lines.sale_price',
+      'consignment_lines.discount_reason',
+      'consignment_lines.sale_entered_by',
+      'consignment_lines.sale_recorded_at',
+      'consignment_lines.resolved_on',
+      'consignment_lines.resolution_note',
+      'consignment_lines.resolution_photo_id',
+      'consignment_lines.resolution_entered_by',
+      'seller.name as seller_name',
+      'resolver.name as resolver_name',
       'works.stock_number',
       'works.title',
       'works.weight_g',

@@ -22,9 +22,11 @@ import { type Terms, termsSchema } from '@/shared/schemas/terms';
 
 import { type Scope } from '../access/viewer';
 import { writeAudit } from '../audit/audit-log.repository';
+import { conditionPhotoUrl } from '../condition/condition.mapper';
 import { latestChecksByLine } from '../condition/condition.service';
 import { type Db } from '../db/database';
 import { HttpError, notFound } from '../http/http-error';
+import { listStatementLocks } from '../sales/sales.repository';
 import { getStudio } from '../studio/studio.service';
 import { toVenue } from '../venues/venues.mapper';
 import { findVenueRow } from '../venues/venues.repository';
@@ -113,6 +115,7 @@ function toLine(
   terms: Terms,
   row: Awaited<ReturnType<typeof listLineRows>>[number],
   checks: Awaited<ReturnType<typeof latestChecksByLine>>,
+  locks: ReadonlyMap<number, string>,
 ): ConsignmentLine {
   const listPrice = { amount: row.list_price, currency: row.currency };
   const lineChecks = checks.get(row.id) ?? {};
@@ -142,6 +145,31 @@ function toLine(
             soldOn: row.sold_on,
             price: { amount: row.sale_price, currency: row.currency },
             split: splitSale(terms, listPrice, { amount: row.sale_price, currency: row.currency }),
+            discount:
+              row.sale_price < row.list_price
+                ? { amount: row.list_price - row.sale_price, currency: row.currency }
+                : null,
+            discountReason: row.discount_reason,
+            enteredBy: row.sale_entered_by ?? 'studio',
+            recordedBy: row.seller_name,
+            recordedAt: row.sale_recorded_at,
+            lockedBy: locks.get(row.id) ?? null,
+          }
+        : null,
+    resolution:
+      row.state !== 'sold' && row.state !== 'consigned' && row.resolved_on !== null
+        ? {
+            on: row.resolved_on,
+            note: row.resolution_note,
+            photo:
+              row.resolution_photo_id === null
+                ? null
+                : {
+                    fileId: row.resolution_photo_id,
+                    url: conditionPhotoUrl(row.resolution_photo_id),
+                  },
+            enteredBy: row.resolution_entered_by ?? 'studio',
+            recordedBy: row.resolver_name,
           }
         : null,
   };
@@ -165,6 +193,7 @@ function toConsignment(
   row: ConsignmentDetailRow,
   lines: ConsignmentLine[],
   insuredOut: Money,
+  asOf: string,
 ): Consignment {
   const terms = termsOf(row);
   return {
@@ -193,6 +222,7 @@ function toConsignment(
     totals: totalsOf(terms, lines),
     insuredOut,
     createdAt: row.created_at,
+    today: asOf,
   };
 }
 
@@ -207,13 +237,20 @@ export async function getConsignment(db: Db, scope: Scope, id: number): Promise<
     scope,
     lineRows.map((l) => l.id),
   );
-  const lines = lineRows.map((l) => toLine(terms, l, checks));
-  const insured = await insuredOutBy(db, scope, await today(db, scope), id);
+  const locks = await listStatementLocks(
+    db,
+    scope,
+    lineRows.filter((l) => l.state === 'sold').map((l) => l.id),
+  );
+  const lines = lineRows.map((l) => toLine(terms, l, checks, locks));
+  const asOf = await today(db, scope);
+  const insured = await insuredOutBy(db, scope, asOf, id);
   return toConsignment(
     scope,
     row,
     lines,
     insured.get(id) ?? { amount: 0, currency: terms.currency },
+    asOf,
   );
 }
 

@@ -107,6 +107,7 @@ export function createMailWorker(options: MailWorkerOptions): MailWorker {
         attachmentsOf(row).map(async (a) => ({
           filename: a.filename,
           contentType: a.contentType,
+          ...(a.contentId ? { cid: a.contentId } : {}),
           content: await renderAttachment(a.recipe, db, { studioId: row.studio_id }),
         })),
       );

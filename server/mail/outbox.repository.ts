@@ -14,7 +14,13 @@ import { nudgeOutbox } from './outbox-nudge';
  * both are written, or neither. Attachments are recipes, rendered when the message goes. Answers
  * the message's id; the mail worker sends it once the transaction has committed.
  */
-export async function enqueueMail(db: Db, mail: OutgoingMail, now = new Date()): Promise<number> {
+export async function enqueueMail(
+  db: Db,
+  mail: OutgoingMail,
+  now = new Date(),
+  /** Held until then, so that news arriving in the meantime can join it (see `replaceHeldMail`). */
+  dueAt = now,
+): Promise<number> {
   const parsed = outgoingMailSchema.parse(mail);
   const at = now.toISOString();
   const { id } = await db
@@ -29,12 +35,73 @@ export async function enqueueMail(db: Db, mail: OutgoingMail, now = new Date()):
       attachments: JSON.stringify(parsed.attachments),
       state: 'queued',
       created_at: at,
-      next_attempt_at: at,
+      next_attempt_at: dueAt.toISOString(),
     })
     .returning('id')
     .executeTakeFirstOrThrow();
   nudgeOutbox();
   return id;
+}
+
+/**
+ * A message of `kind` to `to` still held back (queued, never tried, unclaimed and not yet due):
+ * one that news of the same kind can still be added to before it goes.
+ */
+export async function findHeldMail(
+  db: Db,
+  studioId: number,
+  kind: string,
+  to: string,
+  now = new Date(),
+) {
+  return db
+    .selectFrom('outbox')
+    .select(['id', 'next_attempt_at'])
+    .where('studio_id', '=', studioId)
+    .where('kind', '=', kind)
+    .where('to_address', '=', to)
+    .where('state', '=', 'queued')
+    .where('attempts', '=', 0)
+    .where('claim_token', 'is', null)
+    .where('next_attempt_at', '>', now.toISOString())
+    .orderBy('id')
+    .executeTakeFirst();
+}
+
+/**
+ * Rewrites a held message with what it now says; answers false when a worker has taken it in
+ * the meantime (then the news goes in a new message). With `mail` null the message is dropped.
+ */
+export async function replaceHeldMail(
+  db: Db,
+  id: number,
+  mail: OutgoingMail | null,
+): Promise<boolean> {
+  if (mail === null) {
+    const result = await db
+      .deleteFrom('outbox')
+      .where('id', '=', id)
+      .where('state', '=', 'queued')
+      .where('attempts', '=', 0)
+      .where('claim_token', 'is', null)
+      .executeTakeFirst();
+    return Number(result.numDeletedRows) === 1;
+  }
+  const parsed = outgoingMailSchema.parse(mail);
+  const result = await db
+    .updateTable('outbox')
+    .set({
+      subject: parsed.subject,
+      text_body: parsed.text,
+      html_body: parsed.html,
+      attachments: JSON.stringify(parsed.attachments),
+    })
+    .where('id', '=', id)
+    .where('state', '=', 'queued')
+    .where('attempts', '=', 0)
+    .where('claim_token', 'is', null)
+    .executeTakeFirst();
+  return Number(result.numUpdatedRows) === 1;
 }
 
 // The page: the studio's own messages, through the scoped builder.

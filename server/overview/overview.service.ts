@@ -6,6 +6,7 @@ import { listConsignmentSummaries } from '../consignments/consignments.repositor
 import { exposureByCurrency, today } from '../consignments/consignments.service';
 import { type Db } from '../db/database';
 import { notFound } from '../http/http-error';
+import { recentSales } from '../sales/recent-sales';
 import { countVenues, countWorksByStatus, findStudioHeading } from './overview.repository';
 
 /** The studio's figures at a glance: works by status, venues, and what is out now. */
@@ -20,6 +21,7 @@ export async function getOverview(db: Db, scope: Scope): Promise<Overview> {
     works: { total: Object.values(byStatus).reduce((a, b) => a + b, 0), byStatus },
     venues: { total: await countVenues(db, scope) },
     consignments: { outCount: out.length, out },
+    recentSales: await recentSales(db, scope),
     exposure: exposure.map(({ currency, venueNames, exposure: e }) => ({
       currency,
       total: e.studio.value,

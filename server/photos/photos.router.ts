@@ -8,6 +8,8 @@ import {
 } from '@/shared/schemas/work';
 
 import { requireRole, scopeOf } from '../access/authenticate';
+import { requireAnyRole, requireScopeOf } from '../access/resource-scope';
+import { studioOf } from '../access/resource-studio.repository';
 import { type AppContext } from '../context';
 import { notFound } from '../http/http-error';
 import { validate } from '../http/validate';
@@ -53,9 +55,17 @@ export function photoFilesRouter({ db, filesDir }: AppContext) {
     if (!photo) throw notFound('That photo');
     await sendRendition(res, store, photo.sha256, variant);
   };
+  const roles = ['owner', 'assistant', 'gallery'] as const;
+  // The photo's own studio: a venue's counter list shows pieces of all the makers it works for.
+  const photoScope = requireScopeOf(
+    db,
+    'That photo',
+    (d, res) => studioOf.workPhoto(d, file.input(res).params.photoId),
+    ...roles,
+  );
   return express
     .Router()
-    .use(requireRole('owner', 'assistant', 'gallery'))
-    .get('/:photoId', file, async (_req, res) => send(res, 'display'))
-    .get('/:photoId/thumbnail', file, async (_req, res) => send(res, 'thumbnail'));
+    .use(requireAnyRole(...roles))
+    .get('/:photoId', file, photoScope, async (_req, res) => send(res, 'display'))
+    .get('/:photoId/thumbnail', file, photoScope, async (_req, res) => send(res, 'thumbnail'));
 }

@@ -6,6 +6,7 @@ import { scoped } from '../access/scoped';
 import { type Scope } from '../access/viewer';
 import { type Db } from '../db/database';
 import { type NewWorkRow } from '../db/schema/works';
+import { containsWord } from '../db/text-search';
 import { latestLineId, statusFromLatestLine } from './work-status';
 import { toPhoto, type toWorkColumns, type WorkListRow } from './works.mapper';
 
@@ -45,7 +46,6 @@ const statusRank = sql<number>`case ${status} ${sql.join(
 )} end`;
 
 /** `%` and `_` in what a maker types are letters, not wildcards. */
-const likeTerm = (word: string) => `%${word.replace(/[\\%_]/g, '\\$&')}%`;
 
 const searchColumns = [
   'works.stock_number',
@@ -66,13 +66,8 @@ function filtered(query: WorksWithPlace, filter: WorkFilter): WorksWithPlace {
   if (filter.venueId) q = q.where('placed.venue_id', '=', filter.venueId);
   // Every word must appear in one of the text columns.
   for (const word of (filter.search ?? '').split(/\s+/).filter(Boolean)) {
-    const pattern = likeTerm(word);
     q = q.where((eb) =>
-      eb.or(
-        searchColumns.map(
-          (column) => sql<SqlBool>`${sql.ref(column)} like ${pattern} escape '\\'`,
-        ) as Expression<SqlBool>[],
-      ),
+      eb.or(searchColumns.map((column) => containsWord(column, word)) as Expression<SqlBool>[]),
     );
   }
   return q;

@@ -1,6 +1,11 @@
 import { z } from 'zod';
 
-import { arrivalReportSchema, conditionCheckSchema, conditionDifferenceSchema } from './condition';
+import {
+  arrivalReportSchema,
+  conditionCheckSchema,
+  conditionDifferenceSchema,
+  conditionPhotoSchema,
+} from './condition';
 import { isoDateSchema } from './dates';
 import { moneySchema, priceSchema } from './money';
 import { saleSplitSchema, termsSchema } from './terms';
@@ -178,6 +183,10 @@ export const workHoldSchema = z.object({
 });
 export type WorkHold = z.infer<typeof workHoldSchema>;
 
+/** Which side entered a sale or a return: the venue's staff, or the studio for a venue that phoned. */
+export const enteredBySchema = z.enum(['venue', 'studio']);
+export type EnteredBy = z.infer<typeof enteredBySchema>;
+
 export const consignmentLineSchema = z.object({
   id: z.number().int(),
   workId: z.number().int(),
@@ -195,7 +204,31 @@ export const consignmentLineSchema = z.object({
   differences: z.array(conditionDifferenceSchema),
   weightG: z.number().int().nullable(),
   /** The sale, once sold: when, for how much, and its split under the consignment's terms. */
-  sale: z.object({ soldOn: isoDateSchema, price: moneySchema, split: saleSplitSchema }).nullable(),
+  sale: z
+    .object({
+      soldOn: isoDateSchema,
+      price: moneySchema,
+      split: saleSplitSchema,
+      /** The list price less the price paid, when it was less. */
+      discount: moneySchema.nullable(),
+      discountReason: z.string().nullable(),
+      enteredBy: enteredBySchema,
+      recordedBy: z.string().nullable(),
+      recordedAt: z.string().nullable(),
+      /** On an issued statement: the sale can no longer be undone. */
+      lockedBy: z.string().nullable(),
+    })
+    .nullable(),
+  /** How the piece left the consignment other than by a sale: returned, damaged, lost, withdrawn. */
+  resolution: z
+    .object({
+      on: isoDateSchema,
+      note: z.string().nullable(),
+      photo: conditionPhotoSchema.nullable(),
+      enteredBy: enteredBySchema,
+      recordedBy: z.string().nullable(),
+    })
+    .nullable(),
 });
 export type ConsignmentLine = z.infer<typeof consignmentLineSchema>;
 
@@ -235,13 +268,26 @@ export const consignmentSchema = z.object({
   /** The insurance value of the pieces still out now. */
   insuredOut: moneySchema,
   createdAt: z.string(),
+  /** Today in the studio's time zone: the day a sale or return defaults to. */
+  today: isoDateSchema,
 });
 export type Consignment = z.infer<typeof consignmentSchema>;
 
-/** `GET /api/venue/lines/:lineId`: one piece a venue holds, as its shelf label opens it. */
+/**
+ * `GET /api/venue/lines/:lineId`: one piece a venue holds, as its shelf label opens it, whichever
+ * of the person's studios is active; with the terms its sale is split by.
+ */
 export const venuePieceSchema = z.object({
   studio: z.object({ id: z.number().int(), name: z.string() }),
-  consignment: consignmentSchema.pick({ id: true, reference: true, title: true, state: true }),
+  consignment: consignmentSchema.pick({
+    id: true,
+    reference: true,
+    title: true,
+    state: true,
+    dispatchDate: true,
+    terms: true,
+    today: true,
+  }),
   line: consignmentLineSchema,
 });
 export type VenuePiece = z.infer<typeof venuePieceSchema>;

@@ -40,6 +40,11 @@ export const mailAttachmentSchema = z.strictObject({
     .refine((name) => !/[/\\]/.test(name), { error: 'A file name has no slashes.' }),
   contentType: z.string().regex(mimeType, { error: 'Give the attachment a MIME type.' }),
   recipe: attachmentRecipeSchema,
+  /** Shown inside the HTML part as `<img src="cid:…">` rather than listed as a file. */
+  contentId: z
+    .string()
+    .regex(/^[a-z0-9.-]{1,64}@saggar$/, { error: 'A content id is `name@saggar`.' })
+    .optional(),
 });
 export type MailAttachment = z.infer<typeof mailAttachmentSchema>;
 

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 
-import { consignmentSummarySchema } from './consignment';
+import { consignmentSummarySchema, enteredBySchema } from './consignment';
+import { isoDateSchema } from './dates';
 import { moneySchema } from './money';
 import { workStatusSchema } from './work';
 
@@ -20,6 +21,21 @@ export const overviewSchema = z.object({
    * What is at risk: the insurance value of every piece out, per venue and in all, one entry per
    * currency (amounts in different currencies are never added together).
    */
+  /** The latest sales, newest first, with what each leaves the maker. */
+  recentSales: z.array(
+    z.object({
+      lineId: z.number().int(),
+      consignmentId: z.number().int(),
+      reference: z.string(),
+      venueName: z.string(),
+      stockNumber: z.string(),
+      title: z.string(),
+      soldOn: isoDateSchema,
+      price: moneySchema,
+      makerShare: moneySchema,
+      enteredBy: enteredBySchema,
+    }),
+  ),
   exposure: z.array(
     z.object({
       currency: z.string(),
@@ -37,11 +53,3 @@ export const overviewSchema = z.object({
   ),
 });
 export type Overview = z.infer<typeof overviewSchema>;
-
-/** `GET /api/venue/consignments`: what one venue holds from the active studio. */
-export const venueHomeSchema = z.object({
-  studio: z.object({ id: z.number().int(), name: z.string() }),
-  venue: z.object({ id: z.number().int(), name: z.string() }),
-  consignments: z.array(consignmentSummarySchema),
-});
-export type VenueHome = z.infer<typeof venueHomeSchema>;

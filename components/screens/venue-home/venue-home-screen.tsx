@@ -18,15 +18,17 @@ export function VenueHomeScreen() {
       ) : (
         <>
           <View style={styles.heading}>
-            <Heading level={1}>{query.data.venue.name}</Heading>
-            <Text variant="small">Work on consignment from {query.data.studio.name}</Text>
+            <Heading level={1}>{query.data.places[0]?.venue.name ?? 'Your venue'}</Heading>
+            <Text variant="small">
+              Work on consignment from {query.data.places.map((p) => p.studio.name).join(', ')}
+            </Text>
           </View>
           <View style={styles.list}>
             <Heading level={2}>Consignments</Heading>
             {query.data.consignments.length === 0 ? (
               <EmptyView
                 title="No consignments yet"
-                message={`When ${query.data.studio.name} sends work to ${query.data.venue.name}, it is listed here.`}
+                message="When a maker sends work to your venue, it is listed here."
               />
             ) : (
               query.data.consignments.map((consignment) => (

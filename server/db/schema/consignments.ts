@@ -2,6 +2,8 @@ import { type Generated, type Insertable, type Selectable, type Updateable } fro
 
 import { type ConsignmentState, type LineState } from '@/shared/schemas/consignment';
 
+export type EnteredBy = 'venue' | 'studio';
+
 export interface ConsignmentsTable {
   id: Generated<number>;
   studio_id: number;
@@ -43,8 +45,19 @@ export interface ConsignmentLinesTable {
   discount: number | null;
   sale_recorded_by: string | null;
   sale_recorded_at: string | null;
+  discount_reason: string | null;
+  /** Which side entered the sale: the venue's staff, or the studio for a venue that phoned it in. */
+  sale_entered_by: EnteredBy | null;
+  /** The queued e-mail telling the maker of this sale, while it can still take more sales. */
+  sale_mail_id: number | null;
   /** the day it was returned, found damaged or declared lost */
   resolved_on: string | null;
+  resolution_note: string | null;
+  /** A photo of the damage (a condition photo's file). */
+  resolution_photo_id: number | null;
+  resolved_by: string | null;
+  resolved_at: string | null;
+  resolution_entered_by: EnteredBy | null;
   /** 1 while this line holds its work on an open consignment, null otherwise (unique per work) */
   holds_work: 1 | null;
   created_at: Generated<string>;

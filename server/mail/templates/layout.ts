@@ -8,6 +8,11 @@ export type MailLayoutInput = {
   heading: string;
   /** Plain text, one entry per paragraph; a line break inside one is kept. */
   paragraphs: readonly string[];
+  /**
+   * Things listed one by one after the paragraphs, each with a picture sent inside the message
+   * (`cid:`) when it has one; the text part gives the words alone.
+   */
+  items?: readonly { text: string; imageCid: string | null; alt: string }[];
   /** The one thing to do next, as a button (and its address written out in the text part). */
   action?: { label: string; url: string };
   /** Why the reader got this, who sent it: small print under a rule. */
@@ -74,7 +79,21 @@ export function wrapText(text: string, width = 76): string {
     .join('\n');
 }
 
-function htmlPart({ heading, paragraphs, action, footer }: MailLayoutInput, url: string | null) {
+function itemHtml(item: NonNullable<MailLayoutInput['items']>[number]) {
+  const picture = item.imageCid
+    ? `<td width="96" valign="top" style="padding:0 16px 0 0;"><img src="cid:${escapeHtml(item.imageCid)}" width="96" height="96" alt="${escapeHtml(item.alt)}" style="display:block;border-radius:6px;border:1px solid ${colours.hairline};"></td>`
+    : '';
+  return (
+    `<table role="presentation" width="100%" cellpadding="0" cellspacing="0" border="0" style="margin:0 0 16px;border-top:1px solid ${colours.hairline};"><tr>` +
+    `${picture}<td valign="top" style="padding:12px 0 0;font-family:${sans};font-size:15px;line-height:22px;color:${colours.ink};">${paragraphHtml(item.text)}</td>` +
+    `</tr></table>`
+  );
+}
+
+function htmlPart(
+  { heading, paragraphs, items = [], action, footer }: MailLayoutInput,
+  url: string | null,
+) {
   const p = (text: string) =>
     `<p style="margin:0 0 16px;font-family:${sans};font-size:16px;line-height:24px;color:${colours.ink};">${paragraphHtml(text)}</p>`;
   const button =
@@ -102,6 +121,7 @@ function htmlPart({ heading, paragraphs, action, footer }: MailLayoutInput, url:
     '<tr><td style="padding:8px 32px 8px;">',
     `<h1 style="margin:0 0 16px;font-family:${serif};font-size:24px;line-height:32px;font-weight:600;color:${colours.ink};">${escapeHtml(heading)}</h1>`,
     ...paragraphs.map(p),
+    ...items.map(itemHtml),
     button,
     '</td></tr>',
     `<tr><td style="padding:16px 32px 28px;border-top:1px solid ${colours.hairline};font-family:${sans};font-size:13px;line-height:19px;color:${colours.inkMuted};">${paragraphHtml(footer)}</td></tr>`,
@@ -115,10 +135,14 @@ function htmlPart({ heading, paragraphs, action, footer }: MailLayoutInput, url:
     .join('\n');
 }
 
-function textPart({ heading, paragraphs, action, footer }: MailLayoutInput, url: string | null) {
+function textPart(
+  { heading, paragraphs, items = [], action, footer }: MailLayoutInput,
+  url: string | null,
+) {
   const parts = [
     `${heading}\n${'='.repeat(Math.min(heading.length, 76))}`,
     ...paragraphs.map((p) => wrapText(p)),
+    ...items.map((item) => wrapText(item.text)),
   ];
   if (action && url) parts.push(`${action.label}:\n${url}`);
   // "-- " on a line of its own marks what follows as the signature (RFC 3676 §4.3).

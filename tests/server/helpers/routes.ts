@@ -21,6 +21,8 @@ export const protectedRoutes: {
   { route: 'POST /api/auth/sign-out', roles: ['owner', 'assistant', 'gallery'] },
   { route: 'GET /api/overview', roles: ['owner', 'assistant'] },
   { route: 'GET /api/venue/consignments', roles: ['gallery'] },
+  { route: 'GET /api/venue/consignments/:id', roles: ['gallery'] },
+  { route: 'GET /api/venue/pieces', roles: ['gallery'] },
   { route: 'GET /api/venue/lines/:lineId', roles: ['gallery'] },
   { route: 'POST /api/quotes/split', roles: ['owner', 'assistant'] },
   { route: 'POST /api/quotes/price-plan', roles: ['owner', 'assistant'] },
@@ -58,6 +60,16 @@ export const protectedRoutes: {
   { route: 'POST /api/consignments/:id/dispatch', roles: ['owner', 'assistant'] },
   { route: 'POST /api/consignments/:id/cancel', roles: ['owner', 'assistant'] },
   { route: 'POST /api/consignments/:id/acknowledge', roles: ['gallery'] },
+  { route: 'POST /api/consignments/:id/sales', roles: ['owner', 'assistant', 'gallery'] },
+  { route: 'POST /api/consignment-lines/:lineId/sale', roles: ['owner', 'assistant', 'gallery'] },
+  {
+    route: 'DELETE /api/consignment-lines/:lineId/sale',
+    roles: ['owner', 'assistant', 'gallery'],
+  },
+  {
+    route: 'POST /api/consignment-lines/:lineId/resolve',
+    roles: ['owner', 'assistant', 'gallery'],
+  },
   { route: 'GET /api/consignments/:id/sheet.pdf', roles: ['owner', 'assistant', 'gallery'] },
   {
     route: 'GET /api/consignments/:id/condition-report.pdf',
