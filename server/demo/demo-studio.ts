@@ -533,7 +533,14 @@ export const demoConsignments = [
       { work: 5 },
       { work: 8 },
       { work: 9 },
-      { work: 12, sold: { on: '2026-11-21', price: 34200 } },
+      {
+        work: 12,
+        sold: {
+          on: '2026-11-21',
+          price: 34200,
+          reason: 'Five per cent off for a returning collector',
+        },
+      },
       { work: 15 },
     ],
   },

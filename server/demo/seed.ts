@@ -198,8 +198,12 @@ async function seedDemo(db: Db, photos: DemoPhoto[][]): Promise<void> {
             state: sold ? 'sold' : 'consigned',
             sold_on: sold?.on ?? null,
             sale_price: sold?.price ?? null,
-            discount: sold ? work.pricePence - sold.price : null,
+            discount: sold && sold.price < work.pricePence ? work.pricePence - sold.price : null,
+            discount_reason:
+              sold && sold.price < work.pricePence && 'reason' in sold ? sold.reason : null,
             sale_recorded_by: sold ? recorder : null,
+            // The Lanthorn's staff record their own sales; the quayside shop phones them in.
+            sale_entered_by: sold ? (c.venue === 'lanthorn' ? 'venue' : 'studio') : null,
             sale_recorded_at: sold ? `${sold.on}T16:30:00.000Z` : null,
             holds_work: sold ? null : 1,
           })
