@@ -8,14 +8,31 @@ import { findOutboxRow, requeueOutboxRow } from './outbox.repository';
 
 type MailContext = Pick<AppContext, 'db' | 'mailFrom' | 'renderAttachment'>;
 
+/**
+ * A message as the owner reads it on Sent mail. Pictures sent inside the message (`cid:`) are
+ * written into its HTML as data, since the page shows it in a frame that reaches nothing else; one
+ * that cannot be made is left out, as a mail program would.
+ */
 export async function getOutboxMessage(
-  { db, mailFrom }: MailContext,
+  { db, mailFrom, renderAttachment }: MailContext,
   scope: Scope,
   id: number,
 ): Promise<OutboxMessage> {
   const row = await findOutboxRow(db, scope, id);
   if (!row) throw notFound('That message');
-  return toOutboxMessage(row, mailFrom);
+  const message = toOutboxMessage(row, mailFrom);
+  let html = message.html;
+  for (const attachment of attachmentsOf(row)) {
+    if (html === null || !attachment.contentId) continue;
+    const content = await renderAttachment(attachment.recipe, db, {
+      studioId: scope.studioId,
+    }).catch(() => null);
+    const src = content
+      ? `data:${attachment.contentType};base64,${content.toString('base64')}`
+      : '';
+    html = html.replaceAll(`cid:${attachment.contentId}`, src);
+  }
+  return { ...message, html };
 }
 
 /** An attachment's bytes, made from its recipe as the worker makes them when it sends. */

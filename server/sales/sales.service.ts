@@ -12,7 +12,7 @@ import {
 import { type Scope } from '../access/viewer';
 import { writeAudit } from '../audit/audit-log.repository';
 import { findConditionPhoto } from '../condition/condition.repository';
-import { getConsignment, termsOf } from '../consignments/consignments.service';
+import { consignmentRow, getConsignment, termsOf } from '../consignments/consignments.service';
 import { type Db } from '../db/database';
 import { HttpError, notFound } from '../http/http-error';
 import { getStudio } from '../studio/studio.service';
@@ -27,6 +27,12 @@ import {
 } from './sales.repository';
 
 type Options = { appUrl: string };
+/** How the studio writes a date and a time: for messages that say when something happened. */
+type Place = { locale: string; timeZone: string };
+const placeOf = (studio: { locale: string; time_zone: string }): Place => ({
+  locale: studio.locale,
+  timeZone: studio.time_zone,
+});
 type Issue = { path: (string | number)[]; message: string };
 
 const enteredBy = (scope: Scope) => (scope.venueId === null ? 'studio' : 'venue');
@@ -52,7 +58,7 @@ function checkShowRunning(line: SaleLineRow) {
 }
 
 /** The refusal for a piece that is no longer out, saying who recorded what, and when. */
-function notOut(line: SaleLineRow, locale: string): HttpError {
+function notOut(line: SaleLineRow, { locale, timeZone }: Place): HttpError {
   if (line.state === 'sold') {
     const by = line.sold_by_name
       ? `${line.sold_by_name}${line.sale_entered_by === 'studio' ? ' (the studio)' : ` at ${line.venue_name}`}`
@@ -60,7 +66,7 @@ function notOut(line: SaleLineRow, locale: string): HttpError {
         ? 'the studio'
         : line.venue_name;
     const when = line.sale_recorded_at
-      ? ` at ${new Date(line.sale_recorded_at).toISOString().slice(11, 16)} UTC`
+      ? ` at ${new Intl.DateTimeFormat(locale, { hour: '2-digit', minute: '2-digit', timeZone }).format(new Date(line.sale_recorded_at))}`
       : '';
     return new HttpError(
       'conflict',
@@ -139,7 +145,7 @@ async function recordSalesIn(
       continue;
     }
     checkShowRunning(line);
-    if (line.state !== 'consigned') throw notOut(line, studio.locale);
+    if (line.state !== 'consigned') throw notOut(line, placeOf(studio));
     const result = checkSale(line, sale, today, sale.path);
     if (!result.split) issues.push(...result.issues);
     else checked.push({ line, sale, ...result, split: result.split });
@@ -158,7 +164,7 @@ async function recordSalesIn(
       at,
     });
     // Another request sold it between the read and this write: say who.
-    if (!sold) throw notOut((await findLineForSale(trx, scope, line.id))!, studio.locale);
+    if (!sold) throw notOut((await findLineForSale(trx, scope, line.id))!, placeOf(studio));
     await writeAudit(trx, scope, {
       action: 'line.sold',
       entity: 'consignment_line',
@@ -217,14 +223,16 @@ export async function recordSales(
   input: SaleBatchParsed,
   options: Options,
 ): Promise<SaleBatchResult> {
-  const recorded = await db.transaction().execute((trx) =>
-    recordSalesIn(
+  const recorded = await db.transaction().execute(async (trx) => {
+    // A consignment the person's venue does not hold is not found, whatever its lines.
+    await consignmentRow(trx, scope, consignmentId);
+    return recordSalesIn(
       trx,
       scope,
       input.sales.map((sale, i) => ({ ...sale, path: ['sales', i] })),
       { ...options, consignmentId },
-    ),
-  );
+    );
+  });
   const consignment = await getConsignment(db, scope, consignmentId);
   const lines = new Map(consignment.lines.map((l) => [l.id, l]));
   return { sales: recorded.map((r) => ({ line: lines.get(r.lineId)!, split: r.split })) };
@@ -301,7 +309,7 @@ export async function resolveLine(
     const line = await lineOrNotFound(trx, scope, lineId);
     checkShowRunning(line);
     const studio = await getStudio(trx, scope);
-    if (line.state !== 'consigned') throw notOut(line, studio.locale);
+    if (line.state !== 'consigned') throw notOut(line, placeOf(studio));
     const today = isoDateInTimeZone(new Date(), studio.time_zone);
     const issues = dateIssues(line, input.on, today, ['on']);
     const photoFileId = input.photoFileId ?? null;
@@ -320,7 +328,7 @@ export async function resolveLine(
       enteredBy: enteredBy(scope),
       at,
     });
-    if (!resolved) throw notOut((await findLineForSale(trx, scope, lineId))!, studio.locale);
+    if (!resolved) throw notOut((await findLineForSale(trx, scope, lineId))!, placeOf(studio));
     await writeAudit(trx, scope, {
       action: `line.${input.state}`,
       entity: 'consignment_line',
