@@ -12,7 +12,7 @@ import {
 import { type Scope } from '../access/viewer';
 import { writeAudit } from '../audit/audit-log.repository';
 import { findConditionPhoto } from '../condition/condition.repository';
-import { getConsignment, termsOf } from '../consignments/consignments.service';
+import { consignmentRow, getConsignment, termsOf } from '../consignments/consignments.service';
 import { type Db } from '../db/database';
 import { HttpError, notFound } from '../http/http-error';
 import { getStudio } from '../studio/studio.service';
@@ -217,14 +217,16 @@ export async function recordSales(
   input: SaleBatchParsed,
   options: Options,
 ): Promise<SaleBatchResult> {
-  const recorded = await db.transaction().execute((trx) =>
-    recordSalesIn(
+  const recorded = await db.transaction().execute(async (trx) => {
+    // A consignment the scope cannot see (another venue's) is not found, whatever its lines.
+    await consignmentRow(trx, scope, consignmentId);
+    return recordSalesIn(
       trx,
       scope,
       input.sales.map((sale, i) => ({ ...sale, path: ['sales', i] })),
       { ...options, consignmentId },
-    ),
-  );
+    );
+  });
   const consignment = await getConsignment(db, scope, consignmentId);
   const lines = new Map(consignment.lines.map((l) => [l.id, l]));
   return { sales: recorded.map((r) => ({ line: lines.get(r.lineId)!, split: r.split })) };
