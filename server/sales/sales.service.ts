@@ -1,5 +1,5 @@
 import { formatDate } from '@/shared/format/dates';
-import { formatMoney, isoDateInTimeZone, splitSale } from '@/shared/money';
+import { formatMoney, isoDateInTimeZone, MoneyRuleError, splitSale } from '@/shared/money';
 import {
   type LineResolveParsed,
   type LineResult,
@@ -107,7 +107,15 @@ function checkSale(line: SaleLineRow, sale: SaleInputParsed, today: string, at: 
     });
   }
   if (issues.length > 0) return { issues } as const;
-  const split = splitSale(termsOf(line), listPrice, sale.salePrice);
+  let split;
+  try {
+    split = splitSale(termsOf(line), listPrice, sale.salePrice);
+  } catch (err) {
+    // A discount the terms cannot carry (the maker left less than nothing) is the price's fault.
+    if (!(err instanceof MoneyRuleError)) throw err;
+    const issue: Issue = { path: [...at, 'salePrice'], message: err.message };
+    return { issues: [issue] } as const;
+  }
   const discount = line.list_price - sale.salePrice.amount;
   return {
     issues,
