@@ -177,6 +177,7 @@ const ownerOnly = (s: number): Statuses => [401, s, 403, 403, 403, 403];
 const studioAndItsVenue = (s: number): Statuses => [401, s, s, s, 404, 404];
 /** The venue side: the studio's roles are refused, another venue's staff find nothing of A's. */
 const venueSide = (s: number): Statuses => [401, 403, 403, s, 404, 404];
+/** Each venue's staff get their own side; another venue's or studio's holds nothing of A's. */
 const anyVenue = (s: number): Statuses => [401, 403, 403, s, s, s];
 
 type Row = {
@@ -624,6 +625,8 @@ describe('the access matrix', () => {
   });
 });
 
+const isPublic = (route: string) => (publicRoutes as readonly string[]).includes(route);
+
 // Reads change nothing, so they share one copy; every other call gets a copy of its own.
 describe.each(
   matrix.map((row) => ({ ...row, name: row.label ? `${row.route} (${row.label})` : row.route })),
@@ -639,6 +642,13 @@ describe.each(
           status,
           status >= 400 ? refusals[status] : undefined,
         ]);
+        const body = JSON.stringify(res.body ?? null);
+        // What the venue side lets through never carries the studio's cost prices.
+        if (who !== 'owner' && who !== 'assistant') expect(body).not.toMatch(/cost_?price/i);
+        // Nor, to another venue's or studio's staff, anything of the consignment sent to A.
+        if ((who === 'otherVenue' || who === 'otherStudio') && !isPublic(row.route)) {
+          expect(body).not.toMatch(/Winter show|Gallery of A|"A-[1-3]"/);
+        }
       } finally {
         if (call.method !== 'get') await close();
       }
