@@ -70,8 +70,8 @@ export async function startDevSmtpServer(options: DevSmtpOptions = {}): Promise<
   const waiters = new Set<() => void>();
   let counter = 0;
 
-  const create = () =>
-    new SMTPServer({
+  const create = () => {
+    const server = new SMTPServer({
       secure: false,
       authOptional: true,
       disabledCommands: ['AUTH', 'STARTTLS'],
@@ -122,6 +122,12 @@ export async function startDevSmtpServer(options: DevSmtpOptions = {}): Promise<
         });
       },
     });
+    // smtp-server passes its socket's and its connections' errors on as its own 'error' event,
+    // which throws when nothing listens: a port in use is `listen`'s to handle, and a connection
+    // broken off is the sender's to retry. Neither may stop the process it runs in.
+    server.on('error', () => undefined);
+    return server;
+  };
 
   // The default port, or the next free one above it; a port asked for is that port or an error.
   const fallForward = options.port === undefined;

@@ -1,5 +1,5 @@
 import { formatDate } from '@/shared/format/dates';
-import { formatMoney, isoDateInTimeZone, splitSale } from '@/shared/money';
+import { formatMoney, isoDateInTimeZone, MoneyRuleError, splitSale } from '@/shared/money';
 import {
   type LineResolveParsed,
   type LineResult,
@@ -113,7 +113,15 @@ function checkSale(line: SaleLineRow, sale: SaleInputParsed, today: string, at: 
     });
   }
   if (issues.length > 0) return { issues } as const;
-  const split = splitSale(termsOf(line), listPrice, sale.salePrice);
+  let split;
+  try {
+    split = splitSale(termsOf(line), listPrice, sale.salePrice);
+  } catch (err) {
+    // A discount the terms cannot carry (the maker left less than nothing) is the price's fault.
+    if (!(err instanceof MoneyRuleError)) throw err;
+    const issue: Issue = { path: [...at, 'salePrice'], message: err.message };
+    return { issues: [issue] } as const;
+  }
   const discount = line.list_price - sale.salePrice.amount;
   return {
     issues,
@@ -224,7 +232,7 @@ export async function recordSales(
   options: Options,
 ): Promise<SaleBatchResult> {
   const recorded = await db.transaction().execute(async (trx) => {
-    // A consignment the person's venue does not hold is not found, whatever its lines.
+    // A consignment the scope cannot see (another venue's) is not found, whatever its lines.
     await consignmentRow(trx, scope, consignmentId);
     return recordSalesIn(
       trx,
