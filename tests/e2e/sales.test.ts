@@ -388,6 +388,25 @@ describe('a gallery marks pieces sold, and the maker sees them', () => {
     await page.context().close();
   });
 
+  it('shows the consignment with its sales and the recent sales wide', async () => {
+    const page = await newPage(env.browser, 'wide');
+    await signInToStudio(page, env.server.url, maker.email);
+    await page.getByTestId('recent-sales').scrollIntoViewIfNeeded();
+    // Wide, the same rows sit in columns: piece, venue, date, price and share.
+    await page.getByTestId(`recent-sale-${lines[0]!.id}`).waitFor();
+    await screenshot(page, 'sales-overview-wide');
+    await expectAccessible(page);
+    await page.getByTestId(`recent-sale-${lines[0]!.id}`).click();
+    await page.getByTestId('consignment-screen').waitFor();
+    await page.getByTestId(`piece-${lines[0]!.id}-outcome-sale`).scrollIntoViewIfNeeded();
+    await screenshot(page, 'sales-consignment-wide');
+    await page.getByTestId('consignment-tallies').scrollIntoViewIfNeeded();
+    await screenshot(page, 'sales-consignment-tallies-wide');
+    await expectAccessible(page);
+    expect(problemsOf(page)).toEqual([]);
+    await page.context().close();
+  });
+
   it('the maker’s sale e-mail waits under Sent mail with each piece, its price and share (phone)', async () => {
     const page = await newPage(env.browser, 'phone');
     await signInToStudio(page, env.server.url, maker.email);
@@ -402,6 +421,13 @@ describe('a gallery marks pieces sold, and the maker sees them', () => {
     await screenshot(page, 'sales-mail-phone');
     await card.click();
     await page.getByTestId('message-screen').waitFor();
+    const state = await textOf(page, 'message-state');
+    if (state === 'Waiting to go') {
+      await expect(textOf(page, 'message-waiting')).resolves.toMatch(
+        /^Waiting to go at .*: sales recorded within a few minutes of each other go as one message\.$/,
+      );
+    }
+    await screenshot(page, 'sales-mail-message-top-phone');
     await page.getByTestId('message-body-view-text').getByText('Plain text').click();
     const body = await textOf(page, 'message-body');
     // The latest message holds the latest sale, the one the studio entered, with its split.

@@ -148,17 +148,19 @@ export function VenueHomeScreen() {
           </Text>
         ) : null}
       </View>
-      <TextField
-        testID="counter-search"
-        label="Find a piece"
-        hint="The stock number on its label, or a word of its title."
-        value={typed}
-        onChangeText={setTyped}
-        autoCapitalize="none"
-        autoCorrect={false}
-        inputMode="search"
-        returnKeyType="search"
-      />
+      <View style={styles.search}>
+        <TextField
+          testID="counter-search"
+          label="Find a piece"
+          hint="The stock number on its label, or a word of its title."
+          value={typed}
+          onChangeText={setTyped}
+          autoCapitalize="none"
+          autoCorrect={false}
+          inputMode="search"
+          returnKeyType="search"
+        />
+      </View>
       <Pieces search={search} showMaker={showMaker} />
       {home.isPending ? (
         <LoadingView message="Finding the consignments…" />
@@ -173,6 +175,7 @@ export function VenueHomeScreen() {
 
 const styles = StyleSheet.create({
   heading: { gap: spacing.xxs },
+  search: { maxWidth: 560 },
   list: { gap: spacing.md },
   // Two columns on a wide screen; a lone last card keeps the width of the others.
   listWide: { flexDirection: 'row', flexWrap: 'wrap' },

@@ -39,43 +39,62 @@ export function VenuePieceScreen({ lineId, sell = false }: { lineId: number; sel
   }
   const { studio, consignment, line } = query.data;
   const check = line.arrivalCheck ?? line.dispatchCheck;
+  const outcome = (
+    <PieceOutcome
+      // A new piece (another label scanned) starts afresh.
+      key={line.id}
+      line={line}
+      consignment={consignment}
+      side="venue"
+      startWith={sell ? 'sale' : null}
+      onFormOpen={setSelling}
+      testID="venue-piece-outcome"
+    />
+  );
+  const details = (
+    <View style={[styles.what, compact && styles.whatBeside]}>
+      <Text variant="small" style={styles.tabular}>
+        {`${line.stockNumber} · ${studio.name}`}
+      </Text>
+      <Heading level={1} testID="venue-piece-title" style={compact && styles.titleCompact}>
+        {line.title}
+      </Heading>
+      <Text variant="number" testID="venue-piece-price">
+        {`${formatMoney(line.listPrice)} list price`}
+      </Text>
+      <StateMark look={lineStateLooks[line.state]} testID="venue-piece-state" />
+      {compact ? null : (
+        <Text variant="small">{`On consignment ${consignment.reference}, ${consignment.title}.`}</Text>
+      )}
+    </View>
+  );
   return (
     <Screen testID="venue-piece-screen">
       <View style={styles.back}>
         <TextLink href="/venue" label="All pieces" />
       </View>
-      <Card style={[styles.card, (wide || compact) && styles.cardRow]}>
-        <SquareImage
-          uri={line.thumbnailUrl}
-          size={wide ? 280 : compact ? 88 : 200}
-          label={`${line.title}, cover photo`}
-        />
-        <View style={[styles.what, (wide || compact) && styles.whatBeside]}>
-          <Text variant="small" style={styles.tabular}>
-            {`${line.stockNumber} · ${studio.name}`}
-          </Text>
-          <Heading level={1} testID="venue-piece-title" style={compact && styles.titleCompact}>
-            {line.title}
-          </Heading>
-          <Text variant="number" testID="venue-piece-price">
-            {`${formatMoney(line.listPrice)} list price`}
-          </Text>
-          <StateMark look={lineStateLooks[line.state]} testID="venue-piece-state" />
-          {compact ? null : (
-            <Text variant="small">{`On consignment ${consignment.reference}, ${consignment.title}.`}</Text>
-          )}
-        </View>
-      </Card>
-      <PieceOutcome
-        // A new piece (another label scanned) starts afresh.
-        key={line.id}
-        line={line}
-        consignment={consignment}
-        side="venue"
-        startWith={sell ? 'sale' : null}
-        onFormOpen={setSelling}
-        testID="venue-piece-outcome"
-      />
+      {wide ? (
+        // Wide: the photo on the left, what it is and what to do with it beside it.
+        <Card style={[styles.card, styles.cardRow]}>
+          <SquareImage uri={line.thumbnailUrl} size={280} label={`${line.title}, cover photo`} />
+          <View style={styles.beside}>
+            {details}
+            {outcome}
+          </View>
+        </Card>
+      ) : (
+        <>
+          <Card style={[styles.card, compact && styles.cardRow]}>
+            <SquareImage
+              uri={line.thumbnailUrl}
+              size={compact ? 88 : 200}
+              label={`${line.title}, cover photo`}
+            />
+            {details}
+          </Card>
+          {outcome}
+        </>
+      )}
       {check ? (
         <Card style={styles.section}>
           <Heading level={2}>Condition</Heading>
@@ -97,6 +116,7 @@ const styles = StyleSheet.create({
   cardRow: { flexDirection: 'row', alignItems: 'flex-start', gap: spacing.lg },
   what: { gap: spacing.xs, alignItems: 'flex-start' },
   whatBeside: { flex: 1 },
+  beside: { flex: 1, gap: spacing.lg },
   titleCompact: { fontSize: 21, lineHeight: 28 },
   section: { gap: spacing.md },
   tabular: { fontVariant: ['tabular-nums'] },
