@@ -44,16 +44,18 @@ const loopback = '127.0.0.1';
 
 function listen(server: SMTPServer, port: number): Promise<number> {
   return new Promise((resolve, reject) => {
+    // SMTPServer re-emits its net server's errors as its own: with no listener there, a port in
+    // use would end the process before the next port could be tried.
     const onError = (err: Error) => {
       server.server.off('listening', onListening);
       reject(err);
     };
     const onListening = () => {
-      server.server.off('error', onError);
+      server.off('error', onError);
       const address = server.server.address();
       resolve(typeof address === 'object' && address ? address.port : port);
     };
-    server.server.once('error', onError);
+    server.once('error', onError);
     server.server.once('listening', onListening);
     server.listen(port, loopback);
   });
