@@ -69,4 +69,14 @@ describe('the local mail stand-in', () => {
       await smtp.stop();
     }
   });
+  it('refuses a port asked for that is in use, as an error the caller can catch', async () => {
+    const taken = await startDevSmtpServer({ mailDir: null, port: 0 });
+    try {
+      await expect(startDevSmtpServer({ mailDir: null, port: taken.port })).rejects.toMatchObject({
+        code: 'EADDRINUSE',
+      });
+    } finally {
+      await taken.stop();
+    }
+  });
 });
