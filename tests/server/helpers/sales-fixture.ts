@@ -110,8 +110,45 @@ export const userId = async (f: ConsignmentFixture, email: string) =>
   (await f.db.selectFrom('users').select('id').where('email', '=', email).executeTakeFirstOrThrow())
     .id;
 
-export const saleMails = (f: ConsignmentFixture) =>
-  f.db.selectFrom('outbox').selectAll().where('kind', '=', 'sale').orderBy('id').execute();
+/**
+ * The sale e-mails in the outbox as they will go: one still waiting is written again by its
+ * composer, as the worker does before sending it, and one left with nothing to say is left out.
+ */
+export async function saleMails(f: ConsignmentFixture) {
+  const rows = await f.db
+    .selectFrom('outbox')
+    .selectAll()
+    .where('kind', '=', 'sale')
+    .orderBy('id')
+    .execute();
+  const compose = f.context.composeMail.sale!;
+  const mails = [];
+  for (const row of rows) {
+    if (row.state !== 'queued') {
+      mails.push(row);
+      continue;
+    }
+    const mail = await compose(f.db, { id: row.id, studioId: row.studio_id, to: row.to_address });
+    if (mail) {
+      mails.push({
+        ...row,
+        subject: mail.subject,
+        text_body: mail.text,
+        html_body: mail.html ?? null,
+        attachments: JSON.stringify(mail.attachments ?? []),
+      });
+    }
+  }
+  return mails;
+}
+
+/** When a sale was recorded, as a refusal says it: the time of day in the studio's zone. */
+export const recordedTime = (recordedAt: string) =>
+  new Intl.DateTimeFormat('en-GB', {
+    hour: '2-digit',
+    minute: '2-digit',
+    timeZone: 'Europe/London',
+  }).format(new Date(recordedAt));
 
 /** A second venue of studio A and a member of its staff, signed in. */
 export async function secondVenueStaff(f: ConsignmentFixture) {

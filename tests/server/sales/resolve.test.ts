@@ -8,6 +8,7 @@ import {
   auditOf,
   dayAfter,
   lineRow,
+  recordedTime,
   resolve,
   type SalesFixture,
   salesFixture,
@@ -207,11 +208,11 @@ describe('POST /api/consignment-lines/:lineId/resolve', () => {
       },
     });
     const sold = await sell(f, 'gallery', f.lines.tallBottle, 24_000);
-    const at = (sold.body.line.sale.recordedAt as string).slice(11, 16);
+    const at = recordedTime(sold.body.line.sale.recordedAt);
     const back = await resolve(f, 'owner', f.lines.tallBottle, { state: 'returned', on: f.today });
     expect(back.status).toBe(409);
     expect(back.body.error.message).toBe(
-      `A-2 Tall bottle is already sold: gallery-a at Gallery of A recorded the sale on ${day} at ${at} UTC.`,
+      `A-2 Tall bottle is already sold: gallery-a at Gallery of A recorded the sale on ${day} at ${at}.`,
     );
   });
 

@@ -42,6 +42,7 @@ async function fixture() {
 const workerFor = (f: SalesFixture, aheadMs: number) =>
   testWorker(f.db, smtp.url, {
     renderAttachment: f.context.renderAttachment,
+    composeMail: f.context.composeMail,
     now: () => new Date(Date.now() + aheadMs),
   });
 
@@ -165,7 +166,13 @@ describe('the maker’s sale e-mail', () => {
     expect(rewritten!.text_body).not.toContain('Moon jar');
 
     expect((await undo(f, 'owner', f.lines.tallBottle)).status).toBe(200);
+    // Nothing left to say: the worker drops the message when it falls due, and sends nothing.
+    expect(await saleMails(f)).toEqual([]);
+    const worker = workerFor(f, saleNoticeHoldMs + 1000);
+    await worker.runOnce();
+    await worker.close();
     expect(await held(f)).toEqual([]);
+    expect(smtp.messages.filter((m) => m.parsed.subject?.includes('Sold'))).toEqual([]);
     // Sold again: a new message, held from now.
     await sell(f, 'gallery', f.lines.tallBottle, 23_000, { discountReason: 'Second thoughts' });
     const [again] = await saleMails(f);

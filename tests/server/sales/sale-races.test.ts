@@ -9,6 +9,7 @@ import {
   auditOf,
   gbp,
   oneLine,
+  recordedTime,
   saleMails,
   type SalesFixture,
   salesFixture,
@@ -67,7 +68,7 @@ describe('concurrent sales', () => {
       const message = `A-2 Tall bottle is already sold: ${who} recorded the sale on ${formatDate(
         f.today,
         'en-GB',
-      )} at ${(sale.recordedAt as string).slice(11, 16)} UTC.`;
+      )} at ${recordedTime(sale.recordedAt)}.`;
       for (const res of refused) {
         expect(res.body).toEqual({ error: { code: 'conflict', message } });
       }

@@ -10,6 +10,7 @@ import {
   dayAfter,
   gbp,
   lineRow,
+  recordedTime,
   resolve,
   saleMails,
   saleOf,
@@ -340,7 +341,7 @@ describe('POST /api/consignment-lines/:lineId/sale', () => {
     const f = await salesFixture();
     const first = await sell(f, 'gallery', f.lines.tallBottle, 24_000);
     expect(first.status).toBe(201);
-    const at = (first.body.line.sale.recordedAt as string).slice(11, 16);
+    const at = recordedTime(first.body.line.sale.recordedAt);
     const day = formatDate(f.today, 'en-GB');
     for (const who of ['owner', 'assistant', 'gallery'] as const) {
       const again = await sell(f, who, f.lines.tallBottle, 20_000, { discountReason: 'Late' });
@@ -348,17 +349,17 @@ describe('POST /api/consignment-lines/:lineId/sale', () => {
       expect(again.body).toEqual({
         error: {
           code: 'conflict',
-          message: `A-2 Tall bottle is already sold: gallery-a at Gallery of A recorded the sale on ${day} at ${at} UTC.`,
+          message: `A-2 Tall bottle is already sold: gallery-a at Gallery of A recorded the sale on ${day} at ${at}.`,
         },
       });
     }
     // A sale the studio took by phone is named as the studio's.
     const phoned = await sell(f, 'assistant', f.lines.teaBowl, 48_000);
-    const phonedAt = (phoned.body.line.sale.recordedAt as string).slice(11, 16);
+    const phonedAt = recordedTime(phoned.body.line.sale.recordedAt);
     const late = await sell(f, 'gallery', f.lines.teaBowl, 48_000);
     expect(late.status).toBe(409);
     expect(late.body.error.message).toBe(
-      `A-3 Tea bowl is already sold: assistant-a (the studio) recorded the sale on ${day} at ${phonedAt} UTC.`,
+      `A-3 Tea bowl is already sold: assistant-a (the studio) recorded the sale on ${day} at ${phonedAt}.`,
     );
     // A piece that left another way says how, by whom and when.
     await resolve(f, 'gallery', f.lines.moonJar, { state: 'returned', on: f.today });
