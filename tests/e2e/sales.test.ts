@@ -14,7 +14,7 @@ import { type Money } from '@/shared/schemas/money';
 import { expectAccessible, newPage, problemsOf, screenshot } from './helpers/browser';
 import { consignmentOf, labelAddresses, sendConsignment, waitFor } from './helpers/consignments';
 import { withServerAndBrowser } from './helpers/setup';
-import { fillSignIn, openSection, signInToStudio } from './helpers/studio';
+import { fillSignIn, makeImage, openSection, signInToStudio } from './helpers/studio';
 
 const env = withServerAndBrowser();
 
@@ -38,22 +38,22 @@ const out = 'venue-piece-outcome';
 
 describe('a gallery marks pieces sold, and the maker sees them', () => {
   let sent: Consignment;
-  /** The seven pieces, in label order: the first label's QR code opens lines[0], and so on. */
+  /** The eight pieces, in label order: the first label's QR code opens lines[0], and so on. */
   let lines: ConsignmentLine[];
   let addresses: string[];
   let today: string;
 
-  it('the owner sends seven pieces to the Lanthorn, whose labels’ QR codes open each piece', async () => {
+  it('the owner sends eight pieces to the Lanthorn, whose labels’ QR codes open each piece', async () => {
     const page = await newPage(env.browser, 'phone');
     await signInToStudio(page, env.server.url, maker.email);
-    sent = await sendConsignment(page, { venueName, title, count: 7 });
+    sent = await sendConsignment(page, { venueName, title, count: 8 });
     expect(sent.state).toBe('dispatched');
     today = sent.today;
     expect(sent.dispatchDate).toBe(today);
 
     // The shelf labels as the venue prints them: each QR code holds the piece's own address on
     // the app's public address (http://localhost:PORT by default), nothing else.
-    addresses = await labelAddresses(page, sent.id, 7);
+    addresses = await labelAddresses(page, sent.id, 8);
     const port = new URL(env.server.url).port;
     const byAddress = new Map(
       sent.lines.map((l) => [`http://localhost:${port}/venue/piece/${l.id}`, l]),
@@ -63,7 +63,7 @@ describe('a gallery marks pieces sold, and the maker sees them', () => {
       if (!line) throw new Error(`A label holds an address of no piece: ${address}`);
       return line;
     });
-    expect(new Set(lines.map((l) => l.id)).size).toBe(7);
+    expect(new Set(lines.map((l) => l.id)).size).toBe(8);
     expect(problemsOf(page)).toEqual([]);
     await page.context().close();
   });
@@ -142,7 +142,7 @@ describe('a gallery marks pieces sold, and the maker sees them', () => {
     await page.context().close();
   });
 
-  it('from the counter list: finds a piece by its number, sells it, returns another, undoes the sale (phone)', async () => {
+  it('from the counter list: finds a piece by its number, sells it, returns one, records one damaged with a photo, undoes the sale (phone)', async () => {
     const page = await newPage(env.browser, 'phone');
     await page.goto(`${env.server.url}/sign-in`);
     await fillSignIn(page, gallery.email);
@@ -195,6 +195,36 @@ describe('a gallery marks pieces sold, and the maker sees them', () => {
       note: 'Collected by the maker for a commission.',
       enteredBy: 'venue',
     });
+
+    // Knocked off its plinth: damaged, with a note and a photo of the damage.
+    const eighth = lines[7]!;
+    await page.goto(`${env.server.url}/venue/piece/${eighth.id}`);
+    await page.getByTestId(`${out}-damaged`).click();
+    const damaged = `${out}-damaged-form`;
+    await page.getByTestId(`${damaged}-submit`).click();
+    await expect(textOf(page, `${damaged}-note-error`)).resolves.toBe(
+      'Say what happened to the piece.',
+    );
+    await page.getByTestId(`${damaged}-note`).fill('Knocked off its plinth; a chip on the rim.');
+    const [chooser] = await Promise.all([
+      page.waitForEvent('filechooser'),
+      page.getByTestId(`${damaged}-photo`).click(),
+    ]);
+    await chooser.setFiles({
+      name: 'rim.jpg',
+      mimeType: 'image/jpeg',
+      buffer: await makeImage('jpeg', [140, 150, 120]),
+    });
+    await page.getByTestId(`${damaged}-photo`).getByText('Change the photo').waitFor();
+    await page.getByTestId(`${damaged}-submit`).scrollIntoViewIfNeeded();
+    await screenshot(page, 'sales-damaged-phone');
+    await expectAccessible(page);
+    await page.getByTestId(`${damaged}-submit`).click();
+    await page.getByTestId(`${out}-resolution`).waitFor();
+    await expect(textOf(page, 'venue-piece-state')).resolves.toBe('Damaged');
+    const broken = (await pieceOf(page, eighth.id)).line.resolution!;
+    expect(broken).toMatchObject({ on: today, note: 'Knocked off its plinth; a chip on the rim.' });
+    expect(broken.photo?.url).toMatch(/^\/api\/condition-photos\/\d+$/);
 
     // The second sale was a mistake: undone, asked once more first.
     await page.goto(`${env.server.url}/venue/piece/${second.id}`);
@@ -333,11 +363,11 @@ describe('a gallery marks pieces sold, and the maker sees them', () => {
       `Entered by the studio (${maker.name})`,
     );
 
-    // Every piece accounted for: six sold, one returned, nothing insured out.
+    // Every piece accounted for: six sold, one returned, one damaged, nothing insured out.
     await expect(textOf(page, 'tally-out')).resolves.toBe('0');
     await expect(textOf(page, 'tally-sold')).resolves.toBe('6');
     await expect(textOf(page, 'tally-returned')).resolves.toBe('1');
-    await expect(textOf(page, 'tally-damaged-lost')).resolves.toBe('0');
+    await expect(textOf(page, 'tally-damaged-lost')).resolves.toBe('1');
     await expect(textOf(page, 'tally-insured-out')).resolves.toBe('£0.00');
     const now = await consignmentOf(page, sent.id);
     const first = now.lines.find((l) => l.id === lines[0]!.id)!;

@@ -50,7 +50,7 @@ const words: Record<
     noteRequired: 'Say what is known of the loss.',
   },
   withdrawn: {
-    heading: 'Withdrawn by the maker',
+    heading: 'Withdraw from this consignment',
     note: 'Note (optional)',
     hint: 'Why it comes off this consignment: a commission, another show…',
     submit: 'Withdraw the piece',

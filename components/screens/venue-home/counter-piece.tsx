@@ -9,8 +9,11 @@ import { Text } from '@/components/ui/text';
 import { focusRing, useFocusRing } from '@/components/ui/use-focus-ring';
 import { lineStateLooks } from '@/constants/states';
 import { palette, radii, spacing } from '@/constants/theme';
+import { useBreakpoint } from '@/hooks/use-breakpoint';
 import { formatMoney } from '@/shared/money/format';
 import { type VenueCounterPiece } from '@/shared/schemas/venue-side';
+
+const photoSize = 96;
 
 function PiecePressable({
   item,
@@ -28,14 +31,12 @@ function PiecePressable({
       {...props}
       style={({ pressed }) => [styles.open, pressed && styles.pressed, focused && focusRing]}
     >
-      <SquareImage uri={line.thumbnailUrl} size={96} label={`${line.title}, cover photo`} />
+      <SquareImage uri={line.thumbnailUrl} size={photoSize} label={`${line.title}, cover photo`} />
       <View style={styles.what}>
         <Text variant="small" style={styles.tabular} numberOfLines={1}>
           {showMaker ? `${line.stockNumber} · ${studio.name}` : line.stockNumber}
         </Text>
-        <Text variant="bodyStrong" numberOfLines={2}>
-          {line.title}
-        </Text>
+        <Text variant="bodyStrong">{line.title}</Text>
         <Text variant="number">{formatMoney(line.listPrice)}</Text>
         <StateMark look={look} />
         {line.state === 'sold' && line.soldOn && line.salePrice ? (
@@ -48,7 +49,8 @@ function PiecePressable({
 
 /**
  * One piece in the counter list: its photo, title, stock number, price and state, opening the
- * piece; a piece still out has "Mark sold" beside it, which opens the piece with the sale begun.
+ * piece; a piece still out has "Mark sold" (under it on a phone, beside it when wide), which
+ * opens the piece with the sale begun.
  */
 export function CounterPiece({
   item,
@@ -60,13 +62,14 @@ export function CounterPiece({
 }) {
   const lineId = String(item.line.id);
   const out = item.line.state === 'consigned';
+  const { wide } = useBreakpoint();
   return (
-    <View style={styles.card} testID={`counter-piece-${item.line.id}`}>
+    <View style={[styles.card, wide && styles.cardWide]} testID={`counter-piece-${item.line.id}`}>
       <Link href={{ pathname: '/venue/piece/[lineId]', params: { lineId } }} asChild>
         <PiecePressable item={item} showMaker={showMaker} testID={`counter-open-${lineId}`} />
       </Link>
       {out ? (
-        <View style={styles.sell}>
+        <View style={wide ? styles.sellBeside : styles.sellBelow}>
           <Link href={{ pathname: '/venue/piece/[lineId]', params: { lineId, sell: '1' } }} asChild>
             <Button
               testID={`counter-sell-${lineId}`}
@@ -82,10 +85,6 @@ export function CounterPiece({
 
 const styles = StyleSheet.create({
   card: {
-    flexDirection: 'row',
-    alignItems: 'center',
-    gap: spacing.sm,
-    paddingRight: spacing.md,
     backgroundColor: palette.surface,
     borderColor: palette.hairline,
     borderWidth: 1,
@@ -102,5 +101,18 @@ const styles = StyleSheet.create({
   pressed: { backgroundColor: palette.sunken },
   what: { flex: 1, gap: 2 },
   tabular: { fontVariant: ['tabular-nums'] },
-  sell: { alignSelf: 'center' },
+  cardWide: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: spacing.sm,
+    paddingRight: spacing.md,
+  },
+  sellBeside: { alignSelf: 'center' },
+  // Under the words, as wide as they are: a big target on the thumb's side.
+  sellBelow: {
+    marginTop: -spacing.xs,
+    paddingLeft: spacing.md + photoSize + spacing.md,
+    paddingRight: spacing.md,
+    paddingBottom: spacing.md,
+  },
 });
