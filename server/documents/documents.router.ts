@@ -3,14 +3,16 @@ import express from 'express';
 
 import { consignmentParamsSchema } from '@/shared/schemas/consignment';
 
-import { requireRole, scopeOf } from '../access/authenticate';
+import { scopeOf } from '../access/authenticate';
+import { requireAnyRole, requireScopeOf } from '../access/resource-scope';
+import { studioOf } from '../access/resource-studio.repository';
 import { type AppContext } from '../context';
 import { validate } from '../http/validate';
 import { photoStore } from '../photos/photo-store';
 import { type DocumentKind, renderConsignmentDocument } from './documents.service';
 
 const byId = validate({ params: consignmentParamsSchema });
-const anyone = requireRole('owner', 'assistant', 'gallery');
+const roles = ['owner', 'assistant', 'gallery'] as const;
 
 /** The path under a consignment where each of its PDFs is served. */
 const documentPaths: Record<DocumentKind, string> = {
@@ -26,8 +28,15 @@ const documentPaths: Record<DocumentKind, string> = {
 export function documentsRouter({ db, filesDir, appUrl }: AppContext) {
   const store = photoStore(filesDir);
   const router = express.Router();
+  // The consignment's own studio: a venue's staff print a maker's documents without switching.
+  const consignmentScope = requireScopeOf(
+    db,
+    'That consignment',
+    (d, res) => studioOf.consignment(d, byId.input(res).params.id),
+    ...roles,
+  );
   for (const [kind, path] of Object.entries(documentPaths) as [DocumentKind, string][]) {
-    router.get(path, anyone, byId, async (_req, res) => {
+    router.get(path, requireAnyRole(...roles), byId, consignmentScope, async (_req, res) => {
       const { id } = byId.input(res).params;
       const document = await renderConsignmentDocument(db, store, scopeOf(res), id, kind, {
         appUrl,
