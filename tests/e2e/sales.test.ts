@@ -259,7 +259,7 @@ describe('a gallery marks pieces sold, and the maker sees them', () => {
     await news.waitFor();
     expect(await news.innerText()).toMatch(
       new RegExp(
-        `^${fourth.stockNumber} .* is already sold: ${gallery.name} at ${venueName} recorded the sale on ${formatDate(today)} at \\d\\d:\\d\\d UTC\\.$`,
+        `^${fourth.stockNumber} .* is already sold: ${gallery.name} at ${venueName} recorded the sale on ${formatDate(today)} at \\d\\d:\\d\\d\\.$`,
       ),
     );
     // The piece is fetched again and shows the sale that won.
