@@ -17,6 +17,7 @@ import { overviewRouter } from './overview/overview.router';
 import { photoFilesRouter, workPhotosRouter } from './photos/photos.router';
 import { quotesRouter } from './quotes/quotes.router';
 import { consignmentSalesRouter, lineSalesRouter } from './sales/sales.router';
+import { statementsRouter } from './statements/statements.router';
 import { studioRouter } from './studio/studio.router';
 import { venueHomeRouter } from './venue-home/venue-home.router';
 import { venuesRouter } from './venues/venues.router';
@@ -56,6 +57,7 @@ export function mountApi(app: Express, context: AppContext): void {
   app.use('/api/consignment-lines/:lineId/condition-reports', conditionReportsRouter(context));
   app.use('/api/condition-photos', conditionPhotosRouter(context));
   app.use('/api/invitations', invitationsRouter(context));
+  app.use('/api/statements', statementsRouter(context));
   app.use('/api/outbox', outboxRouter(context));
 
   app.use('/api', apiNotFound);

@@ -253,7 +253,6 @@ export async function undoSale(
     if (line.state !== 'sold') {
       throw new HttpError('conflict', `${pieceName(line)} is not sold: there is no sale to undo.`);
     }
-    checkShowRunning(line);
     const statement = await findIssuedStatementOf(trx, scope, lineId);
     if (statement) {
       throw new HttpError(
@@ -263,6 +262,7 @@ export async function undoSale(
         }: it is locked. A correction goes on a new statement.`,
       );
     }
+    checkShowRunning(line);
     if (scope.venueId !== null && line.sale_entered_by === 'studio') {
       throw new HttpError(
         'forbidden',

@@ -9,7 +9,11 @@ import { type OutboxTable } from './outbox';
 import { type PaymentsTable } from './payments';
 import { type SessionsTable } from './sessions';
 import { type SignInLimitsTable } from './sign-in-limits';
-import { type StatementLinesTable, type StatementsTable } from './statements';
+import {
+  type StatementAdjustmentsTable,
+  type StatementLinesTable,
+  type StatementsTable,
+} from './statements';
 import { type StudiosTable } from './studios';
 import { type UsersTable } from './users';
 import { type VenuesTable } from './venues';
@@ -34,6 +38,7 @@ export interface Database {
   condition_findings: ConditionFindingsTable;
   statements: StatementsTable;
   statement_lines: StatementLinesTable;
+  statement_adjustments: StatementAdjustmentsTable;
   payments: PaymentsTable;
   outbox: OutboxTable;
   audit_log: AuditLogTable;
