@@ -8,6 +8,7 @@ import { documentAttachmentKinds } from './documents/document-attachments';
 import { type AttachmentRenderer, attachmentRenderer } from './mail/attachments';
 import { defaultMailFrom } from './mail/transport';
 import { photoAttachmentKinds } from './photos/photo-attachments';
+import { statementAttachmentKinds } from './statements/statement-attachments';
 
 /** Everything the app needs from outside, so tests can build it over an in-memory database. */
 export type AppContext = {
@@ -72,6 +73,7 @@ export function createContext(options: ContextOptions): AppContext {
     renderAttachment: attachmentRenderer({
       ...documentAttachmentKinds({ filesDir: options.filesDir, appUrl }),
       ...photoAttachmentKinds({ filesDir: options.filesDir }),
+      ...statementAttachmentKinds({ appUrl }),
     }),
     ...rest,
     publicUrl,

@@ -16,6 +16,7 @@ import { HttpError, notFound } from '../http/http-error';
 import { getStudio } from '../studio/studio.service';
 import { findVenueRow } from '../venues/venues.repository';
 import { findConsignmentForStatement, settleConsignmentIfDone } from './settlement';
+import { queueStatementMail } from './statement-mail';
 import {
   findDraftFor,
   findStatementRow,
@@ -285,7 +286,12 @@ export async function createStatement(
  * Issues a draft: its figures are frozen from now on (a correction is a new statement) and the
  * sales it covers are locked.
  */
-export async function issueStatement(db: Db, scope: Scope, id: number): Promise<Statement> {
+export async function issueStatement(
+  db: Db,
+  scope: Scope,
+  id: number,
+  { appUrl }: { appUrl: string },
+): Promise<Statement> {
   await db.transaction().execute(async (trx) => {
     const draft = await getStatement(trx, scope, id);
     if (draft.state !== 'draft') {
@@ -322,12 +328,19 @@ export async function issueStatement(db: Db, scope: Scope, id: number): Promise<
         maker_share: l.makerShare.amount,
       })),
     );
+    const mailId = await queueStatementMail(trx, scope, draft, { appUrl });
     await writeAudit(trx, scope, {
       action: 'statement.issued',
       entity: 'statement',
       entityId: id,
       before: { state: 'draft' },
-      after: { state: 'issued', issuedAt, totals, lines: draft.lines.map((l) => l.lineId) },
+      after: {
+        state: 'issued',
+        issuedAt,
+        totals,
+        lines: draft.lines.map((l) => l.lineId),
+        mailId,
+      },
     });
   });
   return getStatement(db, scope, id);
