@@ -32,7 +32,6 @@ const adjustmentWords = {
   other: 'Other',
 } as const;
 
-
 /** The statement as a PDF, for whoever may see it, with the name it is saved under. */
 export async function renderStatementDocument(
   db: Db,

@@ -57,6 +57,25 @@ describe('a whole show through the API', () => {
       note: 'Collected by the maker',
     });
     expect(returned.status).toBe(200);
+    // Back in the studio, a chip the dispatch check did not have: new damage, at the venue, where
+    // venue A's terms have the venue insure it, for its insurance value (the maker's net).
+    const back = await owner.post(`/api/consignment-lines/${third!.id}/condition-reports`, {
+      stage: 'return',
+      examinerName: 'Ines',
+      examinedOn: today,
+      findings: [{ kind: 'chip', grade: 'marked', location: 'rim', sizeMm: 4 }],
+    });
+    expect(back.status).toBe(201);
+    const returnedLine = (await owner.get(`/api/consignments/${show.id}`)).body.lines.find(
+      (l: { id: number }) => l.id === third!.id,
+    );
+    expect(returnedLine.newDamage).toMatchObject({
+      where: 'at-venue',
+      insuredBy: 'venue',
+      // A-3 is listed at £480: the maker's net after 40% commission is £288 (docs/money-rules.md).
+      insuranceValue: gbp(28_800),
+    });
+    expect(returnedLine.newDamage.differences).toHaveLength(1);
     const closed = await owner.post(`/api/consignments/${show.id}/close`);
     expect(closed.status).toBe(200);
     expect(closed.body.state).toBe('closed');
