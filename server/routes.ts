@@ -6,7 +6,7 @@ import { conditionReportsRouter } from './condition/condition.router';
 import { conditionPhotosRouter } from './condition/condition-photos.router';
 import { consignmentsRouter } from './consignments/consignments.router';
 import { type AppContext } from './context';
-import { documentsRouter } from './documents/documents.router';
+import { documentsRouter, lineDocumentsRouter } from './documents/documents.router';
 import { healthRouter } from './health/health.router';
 import { apiNotFound } from './http/error-handler';
 import { sameOrigin } from './http/same-origin';
@@ -54,6 +54,7 @@ export function mountApi(app: Express, context: AppContext): void {
   app.use('/api/consignments/:id/sales', consignmentSalesRouter(context));
   app.use('/api/consignments', consignmentsRouter(context));
   app.use('/api/consignment-lines/:lineId', lineSalesRouter(context));
+  app.use('/api/consignment-lines/:lineId', lineDocumentsRouter(context));
   app.use('/api/consignment-lines/:lineId/condition-reports', conditionReportsRouter(context));
   app.use('/api/condition-photos', conditionPhotosRouter(context));
   app.use('/api/invitations', invitationsRouter(context));

@@ -150,3 +150,23 @@ export type StatementDocumentData = DocumentHeading & {
   /** Where the venue pays online, printed under the balance; null when settled. */
   payUrl: string | null;
 };
+
+/** One stage's check as a claim summary lists it: who, when, and each finding in words. */
+export type ClaimCheck = {
+  stageWords: string;
+  examinerName: string;
+  examinedOn: string;
+  findings: string[];
+};
+
+/** A damage claim's summary: the piece, its value, who insured it where, and what changed. */
+export type ClaimSummaryData = DocumentHeading & {
+  piece: { stockNumber: string; title: string; listPrice: Money };
+  insuranceValue: Money;
+  /** "the venue, on its premises" or "the maker, in transit". */
+  insuredWords: string;
+  whereWords: string;
+  checks: ClaimCheck[];
+  newDamage: string[];
+  photos: Uint8Array[];
+};

@@ -42,13 +42,7 @@ describe('GET /api/statements/:id.pdf', () => {
     });
     const res = await request(f.app)
       .get(`/api/statements/${statement.id}.pdf`)
-      .set('Cookie', await f.cookie('owner'))
-      .buffer(true)
-      .parse((r, done) => {
-        const chunks: Buffer[] = [];
-        r.on('data', (c: Buffer) => chunks.push(c));
-        r.on('end', () => done(null, Buffer.concat(chunks)));
-      });
+      .set('Cookie', await f.cookie('owner'));
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toBe('application/pdf');
     const text = squash(pdfPages(res.body).join('\n'));

@@ -1,3 +1,6 @@
+import request from 'supertest';
+
+import { pdfPages, squash } from '../../documents/helpers/pdf';
 import { as, consignmentFixture, dispatchedWith } from '../helpers/consignment-fixture';
 
 const gbp = (amount: number) => ({ amount, currency: 'GBP' });
@@ -76,6 +79,16 @@ describe('a whole show through the API', () => {
       insuranceValue: gbp(28_800),
     });
     expect(returnedLine.newDamage.differences).toHaveLength(1);
+    const claim = await request(f.app)
+      .get(`/api/consignment-lines/${third!.id}/claim.pdf`)
+      .set('Cookie', await f.cookie('owner'));
+    expect(claim.status).toBe(200);
+    const claimText = squash(pdfPages(claim.body).join('\n'));
+    expect(claimText).toContain('New since dispatch: Chip, marked, rim, 4 mm');
+    expect(claimText).toContain('£288.00');
+    expect(claimText).toContain('where the agreed terms have the venue insure it');
+    // The gallery's staff cannot download the maker's claim.
+    expect((await gallery.get(`/api/consignment-lines/${third!.id}/claim.pdf`)).status).toBe(403);
     const closed = await owner.post(`/api/consignments/${show.id}/close`);
     expect(closed.status).toBe(200);
     expect(closed.body.state).toBe('closed');
