@@ -22,6 +22,7 @@ import { studioRouter } from './studio/studio.router';
 import { venueHomeRouter } from './venue-home/venue-home.router';
 import { venuesRouter } from './venues/venues.router';
 import { worksRouter } from './works/works.router';
+import { yearRouter } from './year/year.router';
 
 /** Every API route, one line each. Order matters only where a comment says so. */
 export function mountApi(app: Express, context: AppContext): void {
@@ -59,6 +60,7 @@ export function mountApi(app: Express, context: AppContext): void {
   app.use('/api/condition-photos', conditionPhotosRouter(context));
   app.use('/api/invitations', invitationsRouter(context));
   app.use('/api/statements', statementsRouter(context));
+  app.use('/api/year', yearRouter(context));
   app.use('/api/outbox', outboxRouter(context));
 
   app.use('/api', apiNotFound);
