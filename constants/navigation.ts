@@ -42,7 +42,5 @@ export function navFor(items: readonly NavItem[], role: Role): NavItem[] {
   return items.filter((item) => !item.roles || item.roles.includes(role));
 }
 
-/** A venue's sections. */
-export const venueNav: readonly NavItem[] = [
-  { key: 'consignments', label: 'Consignments', href: '/venue' },
-];
+/** A venue's sections: the counter list, which holds the consignments too. */
+export const venueNav: readonly NavItem[] = [{ key: 'counter', label: 'Counter', href: '/venue' }];

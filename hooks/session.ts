@@ -1,5 +1,6 @@
 import { type QueryClient, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { type Href } from 'expo-router';
+import { type Href, usePathname } from 'expo-router';
+import { useState } from 'react';
 
 import { type Membership } from '@/shared/schemas/membership';
 import { type Me, meSchema, type SignIn } from '@/shared/schemas/session';
@@ -124,26 +125,83 @@ function useGate<Ready extends object>(decide: (me: Me | null) => Gate<Ready>): 
 }
 
 /**
- * Sign-in opens only when signed out; choosing a studio only when signed in. The client only
+ * A page to go back to after signing in, only if it is a path on this site: it starts with one
+ * "/" (never "//" or "/\\", which a browser reads as another host), holds no control characters,
+ * and is not the sign-in page itself. Anything else is ignored.
+ */
+export function safeNextPath(next: unknown): string | null {
+  if (typeof next !== 'string' || next.length > 2000) return null;
+  if (!next.startsWith('/') || next.startsWith('//')) return null;
+
+  if (/[\u0000-\u001f\u007f\\]/.test(next)) return null;
+  if (next === '/sign-in' || next.startsWith('/sign-in?') || next.startsWith('/sign-in/')) {
+    return null;
+  }
+  return next;
+}
+
+/** Sign-in, remembering the page to come back to (the home pages need no reminder). */
+export function signInHref(next?: string | null): Href {
+  const path = safeNextPath(next);
+  return path === null || path === '/' || path === '/venue'
+    ? '/sign-in'
+    : { pathname: '/sign-in', params: { next: path } };
+}
+
+/**
+ * Sign-in opens only when signed out; choosing a studio only when signed in. Once signed in,
+ * sign-in goes on to `next` when it is a safe path on this site, otherwise home. The client only
  * hides what the server would refuse; the server checks every request again.
  */
-export function useSessionGate(area: 'sign-in' | 'choose-studio'): Gate {
+export function useSessionGate(area: 'sign-in' | 'choose-studio', next?: unknown): Gate {
   return useGate((me) => {
     const home = homeArea(me);
     const allowed = area === 'sign-in' ? home === 'sign-in' : me !== null;
-    return allowed ? { status: 'ready' } : { status: 'redirect', href: areaHref(home) };
+    if (allowed) return { status: 'ready' };
+    const path = area === 'sign-in' ? safeNextPath(next) : null;
+    return { status: 'redirect', href: path === null ? areaHref(home) : (path as Href) };
   });
 }
 
-/** The studio side opens for owners and assistants, the venue side for gallery staff. */
+/**
+ * The membership a side opens with. The studio side: the active membership, when it is an owner's
+ * or an assistant's. The venue side: the active one when it is a venue's staff, otherwise any
+ * venue membership, so a scanned label opens whichever studio is active (the server scopes each
+ * piece by its own studio).
+ */
+export function membershipFor(me: Me, area: 'studio' | 'venue'): Membership | null {
+  const active = activeMembership(me);
+  if (area === 'studio') return active !== null && active.role !== 'gallery' ? active : null;
+  if (active?.role === 'gallery') return active;
+  return me.memberships.find((membership) => membership.role === 'gallery') ?? null;
+}
+
+/**
+ * The path a guarded layout was opened at. While its gate waits, the layout renders no navigator
+ * and Expo Router then reports the group's root instead (a scanned `/venue/piece/42` reads as
+ * `/venue`): so the path is the one of the first render, or of the last render with the side open.
+ */
+function useAskedPath(open: boolean): string {
+  const pathname = usePathname();
+  const [asked, setAsked] = useState(pathname);
+  // Kept from an earlier render, as React's guide on state from previous renders does.
+  if (open && pathname !== asked) setAsked(pathname);
+  return open ? pathname : asked;
+}
+
+/**
+ * The studio side opens for owners and assistants, the venue side for anyone who works for a
+ * venue. Signed out, both send to sign-in with the page asked for, to come back to it.
+ */
 export function useMembershipGate(
   area: 'studio' | 'venue',
 ): Gate<{ me: Me; membership: Membership }> {
+  const me = useMeQuery();
+  const path = useAskedPath(me.data !== undefined && me.data !== null);
   return useGate<{ me: Me; membership: Membership }>((me) => {
-    const membership = me === null ? null : activeMembership(me);
-    if (me === null || membership === null || homeArea(me) !== area) {
-      return { status: 'redirect', href: areaHref(homeArea(me)) };
-    }
+    if (me === null) return { status: 'redirect', href: signInHref(path) };
+    const membership = membershipFor(me, area);
+    if (membership === null) return { status: 'redirect', href: areaHref(homeArea(me)) };
     return { status: 'ready', me, membership };
   });
 }

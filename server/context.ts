@@ -6,8 +6,10 @@ import { type AuthOptions, createAuth } from './auth/auth';
 import { type Db } from './db/database';
 import { documentAttachmentKinds } from './documents/document-attachments';
 import { type AttachmentRenderer, attachmentRenderer } from './mail/attachments';
+import { type MailComposers } from './mail/composers';
 import { defaultMailFrom } from './mail/transport';
 import { photoAttachmentKinds } from './photos/photo-attachments';
+import { composeSaleNotice } from './sales/sale-notice';
 import { statementAttachmentKinds } from './statements/statement-attachments';
 
 /** Everything the app needs from outside, so tests can build it over an in-memory database. */
@@ -40,6 +42,8 @@ export type AppContext = {
    * shows what was sent; refuses a kind nobody registered.
    */
   renderAttachment: AttachmentRenderer;
+  /** Kinds of message written again from their data just before they go (the sale e-mail). */
+  composeMail: MailComposers;
 };
 
 export type ContextOptions = Omit<
@@ -51,12 +55,16 @@ export type ContextOptions = Omit<
   | 'trustProxy'
   | 'mailFrom'
   | 'renderAttachment'
+  | 'composeMail'
   | 'appUrl'
 > &
   Pick<AuthOptions, 'secret'> &
   Partial<Pick<AuthOptions, 'publicUrl'>> &
   Partial<
-    Pick<AppContext, 'signInLimit' | 'trustProxy' | 'mailFrom' | 'renderAttachment' | 'appUrl'>
+    Pick<
+      AppContext,
+      'signInLimit' | 'trustProxy' | 'mailFrom' | 'renderAttachment' | 'composeMail' | 'appUrl'
+    >
   >;
 
 export function createContext(options: ContextOptions): AppContext {
@@ -75,6 +83,7 @@ export function createContext(options: ContextOptions): AppContext {
       ...photoAttachmentKinds({ filesDir: options.filesDir }),
       ...statementAttachmentKinds({ appUrl }),
     }),
+    composeMail: { sale: composeSaleNotice({ appUrl }) },
     ...rest,
     publicUrl,
     appUrl,

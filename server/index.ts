@@ -51,6 +51,7 @@ async function main() {
     transport,
     from: context.mailFrom,
     renderAttachment: context.renderAttachment,
+    composeMail: context.composeMail,
     logger: logger.child({ part: 'mail' }),
   });
   mailWorker.start();

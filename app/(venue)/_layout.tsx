@@ -5,7 +5,10 @@ import { Shell } from '@/components/ui/shell';
 import { venueNav } from '@/constants/navigation';
 import { useMembershipGate } from '@/hooks/session';
 
-/** Gallery staff only: owners and assistants go to the studio's overview. */
+/**
+ * Anyone who works for a venue, whichever studio is active; owners and assistants go to the
+ * studio's overview. Signed out, sign-in brings them back to the page asked for.
+ */
 export default function VenueLayout() {
   const gate = useMembershipGate('venue');
   if (gate.status !== 'ready') return <GateFallback gate={gate} />;

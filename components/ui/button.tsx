@@ -15,6 +15,8 @@ export type ButtonProps = Omit<PressableProps, 'children' | 'style'> & {
   busyLabel?: string;
   busy?: boolean;
   variant?: Variant;
+  /** `large`: the one action a screen is for, pressed with a thumb (a sale at the counter). */
+  size?: 'regular' | 'large';
   icon?: ReactNode;
 };
 
@@ -23,6 +25,7 @@ export function Button({
   busyLabel,
   busy = false,
   variant = 'primary',
+  size = 'regular',
   disabled,
   icon,
   ...props
@@ -40,13 +43,14 @@ export function Button({
       style={({ pressed }) => [
         styles.base,
         styles[variant],
+        size === 'large' && styles.large,
         pressed && pressedStyles[variant],
         inactive && styles.inactive,
         focused && focusRing,
       ]}
     >
       {icon}
-      <Text variant="label" style={labelStyles[variant]}>
+      <Text variant={size === 'large' ? 'bodyStrong' : 'label'} style={labelStyles[variant]}>
         {busy && busyLabel ? busyLabel : label}
       </Text>
     </Pressable>
@@ -71,6 +75,7 @@ const styles = StyleSheet.create({
   quiet: { backgroundColor: 'transparent', borderColor: 'transparent' },
   danger: { backgroundColor: palette.surface, borderColor: palette.danger, borderWidth: 2 },
   inactive: { opacity: 0.7 },
+  large: { minHeight: 56, paddingHorizontal: spacing.xl },
 });
 
 const pressedStyles = StyleSheet.create({

@@ -18,10 +18,17 @@ type ConsignmentCardProps = {
   href: Href;
   /** The venue's own screens leave out its name: they are all theirs. */
   showVenue?: boolean;
+  /** A line under the title: whose work it is, or what is waiting to be done. */
+  note?: string;
 };
 
 /** One consignment as a card: what, where, in what state, until when, and how it is going. */
-export function ConsignmentCard({ consignment, href, showVenue = true }: ConsignmentCardProps) {
+export function ConsignmentCard({
+  consignment,
+  href,
+  showVenue = true,
+  note,
+}: ConsignmentCardProps) {
   const { id, reference, title, venueName, state, closingDate, linesOut, linesSold, insuredOut } =
     consignment;
   const look = consignmentStateLooks[state];
@@ -29,7 +36,7 @@ export function ConsignmentCard({ consignment, href, showVenue = true }: Consign
     <LinkCard
       href={href}
       testID={`consignment-card-${id}`}
-      label={`${reference}, ${title}${showVenue ? `, at ${venueName}` : ''}, ${look.word}`}
+      label={`${reference}, ${title}${showVenue ? `, at ${venueName}` : ''}, ${look.word}${note ? `, ${note}` : ''}`}
     >
       <View style={styles.top}>
         <Text variant="small" style={styles.reference}>
@@ -39,6 +46,7 @@ export function ConsignmentCard({ consignment, href, showVenue = true }: Consign
       </View>
       <Heading level={3}>{title}</Heading>
       {showVenue ? <Text>{venueName}</Text> : null}
+      {note ? <Text variant="label">{note}</Text> : null}
       <Text variant="small">
         {closingDate ? `Closes ${formatDate(closingDate)}` : 'No closing date set'}
       </Text>

@@ -2,6 +2,8 @@ import { type ReactNode } from 'react';
 import { type FieldErrors, type FieldValues } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 
+import { spacing } from '@/constants/theme';
+
 import { Button } from './button';
 import { Notice } from './notice';
 
@@ -15,6 +17,13 @@ type FormFooterProps = {
   onSubmit: () => void;
   /** Shown between the notices and the button, e.g. what happens to photos on save. */
   children?: ReactNode;
+  /** Beside the button, e.g. a way to close the form without saving. */
+  aside?: ReactNode;
+  /**
+   * The button as wide as the form (phone-first forms used one-handed, such as a sale at the
+   * counter), with `aside` under it.
+   */
+  stretch?: boolean;
 };
 
 /**
@@ -29,6 +38,8 @@ export function FormFooter({
   busy,
   onSubmit,
   children,
+  aside,
+  stretch = false,
 }: FormFooterProps) {
   const formError = errors.root?.server?.message;
   const fieldCount = Object.keys(errors).filter((key) => key !== 'root').length;
@@ -43,19 +54,28 @@ export function FormFooter({
         />
       ) : null}
       {children}
-      <View style={styles.submit}>
+      <View style={stretch ? styles.stretched : styles.buttons}>
         <Button
           testID={`${name}-submit`}
           label={submitLabel}
           busyLabel={busyLabel}
           busy={busy}
           onPress={onSubmit}
+          size={stretch ? 'large' : 'regular'}
         />
+        {aside}
       </View>
     </>
   );
 }
 
 const styles = StyleSheet.create({
-  submit: { alignSelf: 'flex-start' },
+  buttons: {
+    flexDirection: 'row',
+    flexWrap: 'wrap',
+    alignItems: 'center',
+    alignSelf: 'flex-start',
+    gap: spacing.sm,
+  },
+  stretched: { alignSelf: 'stretch', gap: spacing.sm },
 });

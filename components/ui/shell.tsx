@@ -146,8 +146,9 @@ export function Shell({ nav, me, membership, children }: ShellProps) {
     <View testID="shell-narrow" style={styles.narrow}>
       <View role="banner" style={styles.header}>
         <View style={styles.headerText}>
+          {/* The venue alone on a phone: "· work from …" would be cut off. */}
           <Text variant="bodyStrong" numberOfLines={1}>
-            {placeLine(membership)}
+            {membership.venueName ?? membership.studioName}
           </Text>
           <Text variant="small" numberOfLines={1}>
             {me.user.name}

@@ -36,7 +36,7 @@ export const consignmentKeys = {
 };
 
 /** A consignment's change moves its works, the overview, the venue's page and the venue side. */
-async function invalidateConsignments(queryClient: QueryClient, id?: number) {
+export async function invalidateConsignments(queryClient: QueryClient, id?: number) {
   await Promise.all([
     queryClient.invalidateQueries({ queryKey: consignmentKeys.lists() }),
     queryClient.invalidateQueries({ queryKey: overviewKeys.all }),

@@ -126,9 +126,12 @@ export async function findConsignmentRow(db: Db, scope: Scope, id: number) {
 }
 export type ConsignmentDetailRow = NonNullable<Awaited<ReturnType<typeof findConsignmentRow>>>;
 
-/** The lines of a consignment, first added first, each with its work and cover photo. */
-export async function listLineRows(db: Db, scope: Scope, consignmentId: number) {
-  return scoped
+/**
+ * The lines of a consignment, first added first, each with its work and cover photo; only the
+ * one asked for when `lineId` is given.
+ */
+export async function listLineRows(db: Db, scope: Scope, consignmentId: number, lineId?: number) {
+  let q = scoped
     .consignmentLines(db, scope)
     .innerJoin('works', 'works.id', 'consignment_lines.work_id')
     .leftJoin('work_photos as cover', (join) =>
@@ -160,8 +163,9 @@ export async function listLineRows(db: Db, scope: Scope, consignmentId: number) 
       'cover.id as cover_photo_id',
     ])
     .where('consignment_lines.consignment_id', '=', consignmentId)
-    .orderBy('consignment_lines.id')
-    .execute();
+    .orderBy('consignment_lines.id');
+  if (lineId !== undefined) q = q.where('consignment_lines.id', '=', lineId);
+  return q.execute();
 }
 export type LineRow = Awaited<ReturnType<typeof listLineRows>>[number];
 

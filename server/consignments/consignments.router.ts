@@ -12,6 +12,8 @@ import {
 } from '@/shared/schemas/consignment';
 
 import { requireRole, scopeOf } from '../access/authenticate';
+import { requireAnyRole, requireScopeOf } from '../access/resource-scope';
+import { studioOf } from '../access/resource-studio.repository';
 import { type Scope } from '../access/viewer';
 import { type AppContext } from '../context';
 import { HttpError } from '../http/http-error';
@@ -42,7 +44,7 @@ const acknowledge = validate({ params: consignmentParamsSchema, body: acknowledg
 
 const anyone = requireRole('owner', 'assistant', 'gallery');
 const studio = requireRole('owner', 'assistant');
-const venue = requireRole('gallery');
+const anyVenue = requireAnyRole('gallery');
 
 /** Terms are the owner's to set (docs/domain.md, roles), here as on a venue. */
 function checkTermsAllowed(scope: Scope, body: { terms?: unknown }) {
@@ -53,6 +55,13 @@ function checkTermsAllowed(scope: Scope, body: { terms?: unknown }) {
 
 /** `/api/consignments`: batches of work sent to a venue, and their life until they are sent. */
 export function consignmentsRouter({ db, appUrl }: AppContext) {
+  // The consignment's own studio: a venue's staff acknowledge any maker's work without switching.
+  const acknowledgeScope = requireScopeOf(
+    db,
+    'That consignment',
+    (d, res) => studioOf.consignment(d, acknowledge.input(res).params.id),
+    'gallery',
+  );
   return express
     .Router()
     .get('/', anyone, list, async (_req, res) => {
@@ -96,7 +105,7 @@ export function consignmentsRouter({ db, appUrl }: AppContext) {
     .post('/:id/cancel', studio, byId, async (_req, res) => {
       res.json(await cancelConsignment(db, scopeOf(res), byId.input(res).params.id));
     })
-    .post('/:id/acknowledge', venue, acknowledge, async (_req, res) => {
+    .post('/:id/acknowledge', anyVenue, acknowledge, acknowledgeScope, async (_req, res) => {
       const { params, body } = acknowledge.input(res);
       res.json(await acknowledgeConsignment(db, scopeOf(res), params.id, body));
     });

@@ -287,6 +287,21 @@ export async function getConsignment(db: Db, scope: Scope, id: number): Promise<
   );
 }
 
+/** One line of a consignment as its page shows it, without working out the rest. */
+export async function getConsignmentLine(
+  db: Db,
+  scope: Scope,
+  consignmentId: number,
+  lineId: number,
+): Promise<ConsignmentLine> {
+  const row = await findConsignmentRow(db, scope, consignmentId);
+  const [lineRow] = row ? await listLineRows(db, scope, consignmentId, lineId) : [];
+  if (!row || !lineRow) throw notFound('That piece');
+  const checks = await latestChecksByLine(db, scope, [lineId]);
+  const locks = await listStatementLocks(db, scope, lineRow.state === 'sold' ? [lineId] : []);
+  return toLine(termsOf(row), lineRow, checks, locks);
+}
+
 /** The consignment as it stands, or 404; inside a transaction when given one. */
 export async function consignmentRow(db: Db, scope: Scope, id: number) {
   const row = await findConsignmentRow(db, scope, id);

@@ -44,16 +44,18 @@ const loopback = '127.0.0.1';
 
 function listen(server: SMTPServer, port: number): Promise<number> {
   return new Promise((resolve, reject) => {
+    // SMTPServer re-emits its net server's errors as its own: with no listener there, a port in
+    // use would end the process before the next port could be tried.
     const onError = (err: Error) => {
       server.server.off('listening', onListening);
       reject(err);
     };
     const onListening = () => {
-      server.server.off('error', onError);
+      server.off('error', onError);
       const address = server.server.address();
       resolve(typeof address === 'object' && address ? address.port : port);
     };
-    server.server.once('error', onError);
+    server.once('error', onError);
     server.server.once('listening', onListening);
     server.listen(port, loopback);
   });
@@ -70,8 +72,8 @@ export async function startDevSmtpServer(options: DevSmtpOptions = {}): Promise<
   const waiters = new Set<() => void>();
   let counter = 0;
 
-  const create = () =>
-    new SMTPServer({
+  const create = () => {
+    const server = new SMTPServer({
       secure: false,
       authOptional: true,
       disabledCommands: ['AUTH', 'STARTTLS'],
@@ -122,6 +124,12 @@ export async function startDevSmtpServer(options: DevSmtpOptions = {}): Promise<
         });
       },
     });
+    // smtp-server passes its socket's and its connections' errors on as its own 'error' event,
+    // which throws when nothing listens: a port in use is `listen`'s to handle, and a connection
+    // broken off is the sender's to retry. Neither may stop the process it runs in.
+    server.on('error', () => undefined);
+    return server;
+  };
 
   // The default port, or the next free one above it; a port asked for is that port or an error.
   const fallForward = options.port === undefined;

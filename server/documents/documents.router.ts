@@ -4,6 +4,8 @@ import express from 'express';
 import { consignmentParamsSchema, lineOnlyParamsSchema } from '@/shared/schemas/consignment';
 
 import { requireRole, scopeOf } from '../access/authenticate';
+import { requireAnyRole, requireScopeOf } from '../access/resource-scope';
+import { studioOf } from '../access/resource-studio.repository';
 import { type AppContext } from '../context';
 import { validate } from '../http/validate';
 import { photoStore } from '../photos/photo-store';
@@ -11,7 +13,7 @@ import { renderClaimDocument } from './claim-document';
 import { type DocumentKind, renderConsignmentDocument } from './documents.service';
 
 const byId = validate({ params: consignmentParamsSchema });
-const anyone = requireRole('owner', 'assistant', 'gallery');
+const roles = ['owner', 'assistant', 'gallery'] as const;
 const studio = requireRole('owner', 'assistant');
 const byLine = validate({ params: lineOnlyParamsSchema });
 
@@ -29,8 +31,15 @@ const documentPaths: Record<DocumentKind, string> = {
 export function documentsRouter({ db, filesDir, appUrl }: AppContext) {
   const store = photoStore(filesDir);
   const router = express.Router();
+  // The consignment's own studio: a venue's staff print a maker's documents without switching.
+  const consignmentScope = requireScopeOf(
+    db,
+    'That consignment',
+    (d, res) => studioOf.consignment(d, byId.input(res).params.id),
+    ...roles,
+  );
   for (const [kind, path] of Object.entries(documentPaths) as [DocumentKind, string][]) {
-    router.get(path, anyone, byId, async (_req, res) => {
+    router.get(path, requireAnyRole(...roles), byId, consignmentScope, async (_req, res) => {
       const { id } = byId.input(res).params;
       const document = await renderConsignmentDocument(db, store, scopeOf(res), id, kind, {
         appUrl,

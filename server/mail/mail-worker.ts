@@ -2,12 +2,15 @@ import { type Logger } from 'pino';
 
 import { type Db } from '../db/database';
 import { type AttachmentRenderer } from './attachments';
+import { type MailComposers } from './composers';
 import { attachmentsOf } from './outbox.mapper';
 import {
   claimDueMail,
   type ClaimedMail,
+  dropClaimedMail,
   markMailAttemptFailed,
   markMailSent,
+  rewriteClaimedMail,
 } from './outbox.repository';
 import { onOutboxNudge } from './outbox-nudge';
 import { mailFromDomain, type MailTransport } from './transport';
@@ -30,6 +33,8 @@ export type MailWorkerOptions = {
   /** The From address every message goes out with. */
   from: string;
   renderAttachment: AttachmentRenderer;
+  /** Kinds of message written again just before they go (see `MailComposer`). */
+  composeMail?: MailComposers;
   logger: Logger;
   /** The clock; tests move it on instead of waiting. */
   now?: () => Date;
@@ -80,6 +85,7 @@ export function createMailWorker(options: MailWorkerOptions): MailWorker {
     transport,
     from,
     renderAttachment,
+    composeMail = {},
     logger,
     now = () => new Date(),
     intervalMs = 15 * second,
@@ -99,16 +105,40 @@ export function createMailWorker(options: MailWorkerOptions): MailWorker {
   const messageIdFor = (row: ClaimedMail['row']) =>
     `<saggar.${row.id}.${Date.parse(row.created_at) || 0}@${domain}>`;
 
-  async function deliver(claim: ClaimedMail): Promise<void> {
+  /** The claimed message as it goes: composed again from its data when its kind has a composer. */
+  async function composed(claim: ClaimedMail): Promise<ClaimedMail['row'] | null> {
     const { row } = claim;
+    const compose = Object.hasOwn(composeMail, row.kind) ? composeMail[row.kind] : undefined;
+    if (!compose) return row;
+    const mail = await compose(db, { id: row.id, studioId: row.studio_id, to: row.to_address });
+    if (!mail) {
+      await dropClaimedMail(db, claim);
+      logger.info({ outboxId: row.id }, 'mail dropped: nothing left to say');
+      return null;
+    }
+    await rewriteClaimedMail(db, claim, mail);
+    return {
+      ...row,
+      subject: mail.subject,
+      text_body: mail.text,
+      html_body: mail.html ?? null,
+      attachments: JSON.stringify(mail.attachments ?? []),
+    };
+  }
+
+  async function deliver(claim: ClaimedMail): Promise<void> {
+    let row = claim.row;
     let messageId: string;
     try {
+      const message = await composed(claim);
+      if (!message) return;
+      row = message;
       const attachments = await Promise.all(
         attachmentsOf(row).map(async (a) => ({
           filename: a.filename,
           contentType: a.contentType,
           ...(a.contentId ? { cid: a.contentId } : {}),
-          content: await renderAttachment(a.recipe, db, { studioId: row.studio_id }),
+          content: await renderAttachment(a.recipe, db, { studioId: message.studio_id }),
         })),
       );
       const info = await transport.sendMail({

@@ -68,42 +68,6 @@ export async function findHeldMail(
     .executeTakeFirst();
 }
 
-/**
- * Rewrites a held message with what it now says; answers false when a worker has taken it in
- * the meantime (then the news goes in a new message). With `mail` null the message is dropped.
- */
-export async function replaceHeldMail(
-  db: Db,
-  id: number,
-  mail: OutgoingMail | null,
-): Promise<boolean> {
-  if (mail === null) {
-    const result = await db
-      .deleteFrom('outbox')
-      .where('id', '=', id)
-      .where('state', '=', 'queued')
-      .where('attempts', '=', 0)
-      .where('claim_token', 'is', null)
-      .executeTakeFirst();
-    return Number(result.numDeletedRows) === 1;
-  }
-  const parsed = outgoingMailSchema.parse(mail);
-  const result = await db
-    .updateTable('outbox')
-    .set({
-      subject: parsed.subject,
-      text_body: parsed.text,
-      html_body: parsed.html,
-      attachments: JSON.stringify(parsed.attachments),
-    })
-    .where('id', '=', id)
-    .where('state', '=', 'queued')
-    .where('attempts', '=', 0)
-    .where('claim_token', 'is', null)
-    .executeTakeFirst();
-  return Number(result.numUpdatedRows) === 1;
-}
-
 // The page: the studio's own messages, through the scoped builder.
 
 const summaryColumns = [
@@ -279,4 +243,34 @@ export async function markMailAttemptFailed(
     .where('claim_token', '=', claim.token)
     .executeTakeFirst();
   return result.numUpdatedRows === 1n;
+}
+
+/** Rewrites a claimed message with what its composer made of it; false if the claim was lost. */
+export async function rewriteClaimedMail(
+  db: Db,
+  claim: ClaimedMail,
+  mail: OutgoingMail,
+): Promise<boolean> {
+  const parsed = outgoingMailSchema.parse(mail);
+  const result = await db
+    .updateTable('outbox')
+    .set({
+      subject: parsed.subject,
+      text_body: parsed.text,
+      html_body: parsed.html,
+      attachments: JSON.stringify(parsed.attachments),
+    })
+    .where('id', '=', claim.row.id)
+    .where('claim_token', '=', claim.token)
+    .executeTakeFirst();
+  return Number(result.numUpdatedRows) === 1;
+}
+
+/** Drops a claimed message its composer had nothing left to say in. */
+export async function dropClaimedMail(db: Db, claim: ClaimedMail): Promise<void> {
+  await db
+    .deleteFrom('outbox')
+    .where('id', '=', claim.row.id)
+    .where('claim_token', '=', claim.token)
+    .execute();
 }

@@ -6,7 +6,27 @@ import { HttpError, notFound } from '../http/http-error';
 import { attachmentsOf, toOutboxMessage } from './outbox.mapper';
 import { findOutboxRow, requeueOutboxRow } from './outbox.repository';
 
-type MailContext = Pick<AppContext, 'db' | 'mailFrom' | 'renderAttachment'>;
+type MailContext = Pick<AppContext, 'db' | 'mailFrom' | 'renderAttachment' | 'composeMail'>;
+
+/** A message still waiting, as its composer would write it now (what the worker will send). */
+async function asItWillGo<Row extends NonNullable<Awaited<ReturnType<typeof findOutboxRow>>>>(
+  db: MailContext['db'],
+  composeMail: MailContext['composeMail'],
+  studioId: number,
+  row: Row,
+): Promise<Row> {
+  const compose = Object.hasOwn(composeMail, row.kind) ? composeMail[row.kind] : undefined;
+  if (!compose || row.state !== 'queued') return row;
+  const mail = await compose(db, { id: row.id, studioId, to: row.to_address });
+  if (!mail) return row;
+  return {
+    ...row,
+    subject: mail.subject,
+    text_body: mail.text,
+    html_body: mail.html ?? null,
+    attachments: JSON.stringify(mail.attachments ?? []),
+  };
+}
 
 /**
  * A message as the owner reads it on Sent mail. Pictures sent inside the message (`cid:`) are
@@ -14,12 +34,13 @@ type MailContext = Pick<AppContext, 'db' | 'mailFrom' | 'renderAttachment'>;
  * that cannot be made is left out, as a mail program would.
  */
 export async function getOutboxMessage(
-  { db, mailFrom, renderAttachment }: MailContext,
+  { db, mailFrom, renderAttachment, composeMail }: MailContext,
   scope: Scope,
   id: number,
 ): Promise<OutboxMessage> {
-  const row = await findOutboxRow(db, scope, id);
-  if (!row) throw notFound('That message');
+  const stored = await findOutboxRow(db, scope, id);
+  if (!stored) throw notFound('That message');
+  const row = await asItWillGo(db, composeMail, scope.studioId, stored);
   const message = toOutboxMessage(row, mailFrom);
   let html = message.html;
   for (const attachment of attachmentsOf(row)) {

@@ -4,7 +4,8 @@ import { type OutgoingMail } from '@/shared/schemas/outbox';
 import { type Scope } from '../access/viewer';
 import { termsOf } from '../consignments/consignments.service';
 import { type Db } from '../db/database';
-import { enqueueMail, findHeldMail, replaceHeldMail } from '../mail/outbox.repository';
+import { type MailComposer } from '../mail/composers';
+import { enqueueMail, findHeldMail } from '../mail/outbox.repository';
 import { saleNoticeMail } from '../mail/templates/sale-notice';
 import { getStudio } from '../studio/studio.service';
 import {
@@ -80,7 +81,9 @@ function noticeMail(
 /**
  * Tells the maker of new sales, inside the transaction that records them: they join the sale
  * e-mail still held back for the owner if there is one, or start a new one held for
- * `saleNoticeHoldMs`. A studio with no owner's address gets none.
+ * `saleNoticeHoldMs`. Joining only links the sale to the message, which is put into words once,
+ * when it goes (`composeSaleNotice`): recording a sale costs the same however many are waiting.
+ * A studio with no owner's address gets none.
  */
 export async function noteSalesForMaker(
   trx: Db,
@@ -90,15 +93,12 @@ export async function noteSalesForMaker(
 ): Promise<void> {
   const to = await findOwnerAddress(trx, scope);
   if (!to) return;
-  const studio = await getStudio(trx, scope);
   const held = await findHeldMail(trx, scope.studioId, 'sale', to, now);
   if (held) {
-    const lines = await listNoticeLines(trx, scope, { lineIds, mailId: held.id });
-    if (await replaceHeldMail(trx, held.id, noticeMail(scope, to, lines, studio, appUrl))) {
-      await setSaleMail(trx, scope, lineIds, held.id);
-      return;
-    }
+    await setSaleMail(trx, scope, lineIds, held.id);
+    return;
   }
+  const studio = await getStudio(trx, scope);
   const lines = await listNoticeLines(trx, scope, { lineIds, mailId: null });
   const mailId = await enqueueMail(
     trx,
@@ -110,22 +110,16 @@ export async function noteSalesForMaker(
 }
 
 /**
- * A sale undone before its e-mail went: the held message is written again without it, or
- * dropped when it was the only one. Once the message has gone, the statement is what counts.
+ * The sale e-mail as it goes: every sale still linked to it (a sale undone meanwhile is not),
+ * or nothing when all were undone.
  */
-export async function withdrawFromSaleNotice(
-  trx: Db,
-  scope: Scope,
-  mailId: number,
-  { appUrl }: { appUrl: string },
-): Promise<void> {
-  const to = await findOwnerAddress(trx, scope);
-  if (!to) return;
-  const lines = await listNoticeLines(trx, scope, { lineIds: [], mailId });
-  const studio = await getStudio(trx, scope);
-  await replaceHeldMail(
-    trx,
-    mailId,
-    lines.length === 0 ? null : noticeMail(scope, to, lines, studio, appUrl),
-  );
+export function composeSaleNotice({ appUrl }: { appUrl: string }): MailComposer {
+  return async (db, message) => {
+    if (message.studioId === null) return null;
+    const scope: Scope = { studioId: message.studioId, venueId: null, userId: '', role: 'owner' };
+    const lines = await listNoticeLines(db, scope, { lineIds: [], mailId: message.id });
+    if (lines.length === 0) return null;
+    const studio = await getStudio(db, scope);
+    return noticeMail(scope, message.to, lines, studio, appUrl);
+  };
 }

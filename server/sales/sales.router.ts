@@ -36,7 +36,7 @@ export function lineSalesRouter({ db, appUrl }: AppContext) {
       res.status(201).json(await recordSale(db, scopeOf(res), params.lineId, body, { appUrl }));
     })
     .delete('/sale', anyRole, byLine, lineScope(byLine), async (_req, res) => {
-      res.json(await undoSale(db, scopeOf(res), byLine.input(res).params.lineId, { appUrl }));
+      res.json(await undoSale(db, scopeOf(res), byLine.input(res).params.lineId));
     })
     .post('/resolve', anyRole, resolve, lineScope(resolve), async (_req, res) => {
       const { params, body } = resolve.input(res);

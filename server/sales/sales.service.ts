@@ -1,5 +1,5 @@
 import { formatDate } from '@/shared/format/dates';
-import { formatMoney, isoDateInTimeZone, splitSale } from '@/shared/money';
+import { formatMoney, isoDateInTimeZone, MoneyRuleError, splitSale } from '@/shared/money';
 import {
   type LineResolveParsed,
   type LineResult,
@@ -12,11 +12,16 @@ import {
 import { type Scope } from '../access/viewer';
 import { writeAudit } from '../audit/audit-log.repository';
 import { findConditionPhoto } from '../condition/condition.repository';
-import { consignmentRow, getConsignment, termsOf } from '../consignments/consignments.service';
+import {
+  consignmentRow,
+  getConsignment,
+  getConsignmentLine,
+  termsOf,
+} from '../consignments/consignments.service';
 import { type Db } from '../db/database';
 import { HttpError, notFound } from '../http/http-error';
 import { getStudio } from '../studio/studio.service';
-import { noteSalesForMaker, withdrawFromSaleNotice } from './sale-notice';
+import { noteSalesForMaker } from './sale-notice';
 import {
   findIssuedStatementOf,
   findLineForSale,
@@ -113,7 +118,15 @@ function checkSale(line: SaleLineRow, sale: SaleInputParsed, today: string, at: 
     });
   }
   if (issues.length > 0) return { issues } as const;
-  const split = splitSale(termsOf(line), listPrice, sale.salePrice);
+  let split;
+  try {
+    split = splitSale(termsOf(line), listPrice, sale.salePrice);
+  } catch (err) {
+    // A discount the terms cannot carry (the maker left less than nothing) is the price's fault.
+    if (!(err instanceof MoneyRuleError)) throw err;
+    const issue: Issue = { path: [...at, 'salePrice'], message: err.message };
+    return { issues: [issue] } as const;
+  }
   const discount = line.list_price - sale.salePrice.amount;
   return {
     issues,
@@ -193,11 +206,6 @@ async function recordSalesIn(
   }));
 }
 
-async function lineOf(db: Db, scope: Scope, consignmentId: number, lineId: number) {
-  const consignment = await getConsignment(db, scope, consignmentId);
-  return consignment.lines.find((l) => l.id === lineId)!;
-}
-
 /** One piece sold, at a price up to its list price, from the day it was sent. */
 export async function recordSale(
   db: Db,
@@ -210,7 +218,7 @@ export async function recordSale(
     .transaction()
     .execute((trx) => recordSalesIn(trx, scope, [{ ...sale, lineId, path: [] }], options));
   return {
-    line: await lineOf(db, scope, recorded!.consignmentId, lineId),
+    line: await getConsignmentLine(db, scope, recorded!.consignmentId, lineId),
     split: recorded!.split,
   };
 }
@@ -224,7 +232,7 @@ export async function recordSales(
   options: Options,
 ): Promise<SaleBatchResult> {
   const recorded = await db.transaction().execute(async (trx) => {
-    // A consignment the person's venue does not hold is not found, whatever its lines.
+    // A consignment the scope cannot see (another venue's) is not found, whatever its lines.
     await consignmentRow(trx, scope, consignmentId);
     return recordSalesIn(
       trx,
@@ -242,12 +250,7 @@ export async function recordSales(
  * Undoes a sale: the piece is out again. A venue's staff undo only the venue's own entries; no
  * one undoes a sale on an issued statement (a correction is a new statement).
  */
-export async function undoSale(
-  db: Db,
-  scope: Scope,
-  lineId: number,
-  options: Options,
-): Promise<LineResult> {
+export async function undoSale(db: Db, scope: Scope, lineId: number): Promise<LineResult> {
   const consignmentId = await db.transaction().execute(async (trx) => {
     const line = await lineOrNotFound(trx, scope, lineId);
     if (line.state !== 'sold') {
@@ -284,12 +287,9 @@ export async function undoSale(
       },
       after: { state: 'consigned' },
     });
-    if (line.sale_mail_id !== null) {
-      await withdrawFromSaleNotice(trx, scope, line.sale_mail_id, options);
-    }
     return line.consignment_id;
   });
-  return { line: await lineOf(db, scope, consignmentId, lineId) };
+  return { line: await getConsignmentLine(db, scope, consignmentId, lineId) };
 }
 
 /**
@@ -344,5 +344,5 @@ export async function resolveLine(
     });
     return line.consignment_id;
   });
-  return { line: await lineOf(db, scope, consignmentId, lineId) };
+  return { line: await getConsignmentLine(db, scope, consignmentId, lineId) };
 }

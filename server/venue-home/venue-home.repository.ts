@@ -17,11 +17,26 @@ export async function findConsignmentOfLine(db: Db, scope: Scope, lineId: number
 
 /**
  * The pieces a venue holds from one studio, from dispatch on (a piece on a consignment not yet
- * sent is still in the studio), each word of `search` in its stock number or title.
+ * sent is still in the studio).
  */
-export async function listVenuePieces(db: Db, scope: Scope, search: string) {
-  let q = scoped
+function heldPieces(db: Db, scope: Scope) {
+  return scoped
     .consignmentLines(db, scope)
+    .where('consignments.state', 'in', ['dispatched', 'on-show', 'closed'])
+    .where('consignment_lines.state', '!=', 'withdrawn');
+}
+
+/** How many of the pieces a venue holds from one studio are in each state. */
+export async function countVenuePieces(db: Db, scope: Scope) {
+  return heldPieces(db, scope)
+    .select(['consignment_lines.state', (eb) => eb.fn.countAll<number>().as('count')])
+    .groupBy('consignment_lines.state')
+    .execute();
+}
+
+/** Those pieces, each word of `search` in its stock number or title. */
+export async function listVenuePieces(db: Db, scope: Scope, search: string) {
+  let q = heldPieces(db, scope)
     .innerJoin('works', 'works.id', 'consignment_lines.work_id')
     .leftJoin('work_photos as cover', (join) =>
       join.onRef('cover.work_id', '=', 'works.id').on('cover.position', '=', 0),
@@ -40,9 +55,7 @@ export async function listVenuePieces(db: Db, scope: Scope, search: string) {
       'works.stock_number',
       'works.title',
       'cover.id as cover_photo_id',
-    ])
-    .where('consignments.state', 'in', ['dispatched', 'on-show', 'closed'])
-    .where('consignment_lines.state', '!=', 'withdrawn');
+    ]);
   for (const word of search.split(/\s+/).filter(Boolean)) {
     q = q.where((eb) =>
       eb.or([

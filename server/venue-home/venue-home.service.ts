@@ -13,7 +13,7 @@ import { getConsignment } from '../consignments/consignments.service';
 import { type Db } from '../db/database';
 import { notFound } from '../http/http-error';
 import { findVenueWithStudio } from '../venues/venues.repository';
-import { findConsignmentOfLine, listVenuePieces } from './venue-home.repository';
+import { countVenuePieces, findConsignmentOfLine, listVenuePieces } from './venue-home.repository';
 
 /** A Scope for each studio the person works with as a venue's staff, whichever is active. */
 function galleryScopes(viewer: Viewer): Scope[] {
@@ -72,7 +72,9 @@ export async function getVenuePieces(db: Db, viewer: Viewer, search = ''): Promi
             row.sale_price === null ? null : { amount: row.sale_price, currency: row.currency },
         },
       });
-      counts[row.state] = (counts[row.state] ?? 0) + 1;
+    }
+    for (const { state, count } of await countVenuePieces(db, scope)) {
+      counts[state] = (counts[state] ?? 0) + Number(count);
     }
   }
   const out = (p: VenueCounterPiece) => (p.line.state === 'consigned' ? 0 : 1);

@@ -17,10 +17,6 @@ export const overviewSchema = z.object({
     outCount: z.number().int(),
     out: z.array(consignmentSummarySchema),
   }),
-  /**
-   * What is at risk: the insurance value of every piece out, per venue and in all, one entry per
-   * currency (amounts in different currencies are never added together).
-   */
   /** The latest sales, newest first, with what each leaves the maker. */
   recentSales: z.array(
     z.object({
@@ -36,6 +32,10 @@ export const overviewSchema = z.object({
       enteredBy: enteredBySchema,
     }),
   ),
+  /**
+   * What is at risk: the insurance value of every piece out, per venue and in all, one entry per
+   * currency (amounts in different currencies are never added together).
+   */
   exposure: z.array(
     z.object({
       currency: z.string(),

@@ -1,44 +1,12 @@
-import fs from 'node:fs';
-import path from 'node:path';
-
-import { simpleParser } from 'mailparser';
-import { type Page } from 'playwright-core';
-
-import { type Consignment } from '@/shared/schemas/consignment';
-
 import { expectAccessible, newPage, problemsOf, screenshot } from './helpers/browser';
+import { consignmentOf, receivedMail, waitFor } from './helpers/consignments';
 import { withServerAndBrowser } from './helpers/setup';
-import { makeImage, signInToStudio } from './helpers/studio';
+import { fillSignIn, makeImage, signInToStudio } from './helpers/studio';
 
 const env = withServerAndBrowser();
 
 const venueName = 'Deepwinter Makers Fair';
 const venueEmail = 'stands@deepwinter.example';
-
-/** The consignment as the API answers the page's signed-in person, at the page's own origin. */
-async function consignmentOf(page: Page, id: number): Promise<Consignment> {
-  const res = await page.request.get(`${new URL(page.url()).origin}/api/consignments/${id}`);
-  expect(res.status()).toBe(200);
-  return (await res.json()) as Consignment;
-}
-
-/** The messages the server's local SMTP stand-in received, parsed as a mail program would. */
-async function receivedMail() {
-  const dir = path.join(env.server.dataDir, 'mail');
-  if (!fs.existsSync(dir)) return [];
-  return Promise.all(
-    fs.readdirSync(dir).map((f) => simpleParser(fs.readFileSync(path.join(dir, f)))),
-  );
-}
-
-async function waitFor<T>(read: () => Promise<T | undefined>, what: string): Promise<T> {
-  for (let i = 0; i < 100; i += 1) {
-    const value = await read();
-    if (value !== undefined) return value;
-    await new Promise((resolve) => setTimeout(resolve, 100));
-  }
-  throw new Error(`Timed out waiting for ${what}`);
-}
 
 describe('sending a batch to a show', () => {
   let consignmentId: number;
@@ -171,7 +139,9 @@ describe('sending a batch to a show', () => {
     );
     await screenshot(page, 'consignment-mail-message-phone');
 
-    const mail = (await receivedMail()).find((m) => m.subject?.includes('Midwinter table'));
+    const mail = (await receivedMail(env.server.dataDir)).find((m) =>
+      m.subject?.includes('Midwinter table'),
+    );
     expect(mail).toBeDefined();
     expect(mail!.to).toMatchObject({ text: venueEmail });
     expect(mail!.attachments.map((a) => a.contentType)).toEqual([
@@ -267,9 +237,7 @@ describe('sending a batch to a show', () => {
 
     const venue = await newPage(env.browser, 'wide');
     await venue.goto(`${env.server.url}/sign-in`);
-    await venue.getByTestId('sign-in-email').fill(venueEmail);
-    await venue.getByTestId('sign-in-password').fill('a long fair password for the stand');
-    await venue.getByTestId('sign-in-submit').click();
+    await fillSignIn(venue, venueEmail, 'a long fair password for the stand');
     await venue.getByTestId('venue-home-screen').waitFor();
     await venue.goto(`${env.server.url}/venue/consignments/${consignmentId}`);
     await venue.getByTestId(`venue-piece-${changedLineId}-differences`).waitFor();

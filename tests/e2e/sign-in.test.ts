@@ -79,7 +79,7 @@ describe.each<ViewportName>(['phone', 'wide'])('at %s size', (viewport) => {
       await page.getByTestId(`consignment-card-${c.id}`).waitFor();
     }
     await expect(page.getByTestId('venue-home-screen').innerText()).resolves.toContain(
-      api.venue.name,
+      api.places[0].venue.name,
     );
     await screenshot(page, `venue-home-${viewport}`);
     await expectAccessible(page);

@@ -107,14 +107,17 @@ describe('GET /api/me', () => {
 
 describe('GET /api/venue/consignments', () => {
   it("shows the gallery member only its venue's agreed consignments from that studio", async () => {
-    const { app, consignmentA } = await twoStudios();
+    const { app, studioA, venueA, consignmentA } = await twoStudios();
     const res = await request(app)
       .get('/api/venue/consignments')
       .set('Cookie', await signIn(app, 'gallery-a@example.test'));
     expect(res.status).toBe(200);
-    expect(res.body.studio.name).toBe('Studio A');
-    expect(res.body.venue.name).toBe('Gallery of A');
-    expect(res.body.consignments.map((c: { id: number }) => c.id)).toEqual([consignmentA]);
+    const studio = { id: studioA, name: 'Studio A' };
+    expect(res.body.places).toEqual([{ studio, venue: { id: venueA, name: 'Gallery of A' } }]);
+    // Not the studio's draft, nor studio B's consignment to its own venue.
+    expect(res.body.consignments).toEqual([
+      expect.objectContaining({ id: consignmentA, venueId: venueA, studio }),
+    ]);
   });
 });
 
@@ -193,7 +196,7 @@ describe('a gallery member of one studio', () => {
 
 describe('PUT /api/me/active-membership', () => {
   it('leaves a person with several memberships to choose, then scopes to the choice', async () => {
-    const { app, db, studioA, studioB, venueB } = await twoStudios();
+    const { app, db, studioA, studioB, venueB, consignmentB } = await twoStudios();
     await addPerson(db, 'both@example.test', [
       { studioId: studioA, role: 'assistant' },
       { studioId: studioB, role: 'gallery', venueId: venueB },
@@ -215,8 +218,14 @@ describe('PUT /api/me/active-membership', () => {
     const overview = await request(app).get('/api/overview').set('Cookie', cookie);
     expect(overview.status).toBe(200);
     expect(overview.body.studio.name).toBe('Studio A');
+    // The venue side is the person's venue in B whichever studio is active (a scanned label
+    // opens its piece without switching); it never shows A, where the person is no venue's staff.
     const venueSide = await request(app).get('/api/venue/consignments').set('Cookie', cookie);
-    expect(venueSide.status).toBe(403);
+    expect(venueSide.status).toBe(200);
+    expect(venueSide.body.places).toEqual([
+      { studio: { id: studioB, name: 'Studio B' }, venue: { id: venueB, name: 'Gallery of B' } },
+    ]);
+    expect(venueSide.body.consignments.map((c: { id: number }) => c.id)).toEqual([consignmentB]);
 
     await request(app)
       .put('/api/me/active-membership')
@@ -224,7 +233,7 @@ describe('PUT /api/me/active-membership', () => {
       .send({ membershipId: inA!.studioId === studioB ? inA!.id : inB!.id });
     const gallerySide = await request(app).get('/api/venue/consignments').set('Cookie', cookie);
     expect(gallerySide.status).toBe(200);
-    expect(gallerySide.body.studio.name).toBe('Studio B');
+    expect(gallerySide.body).toEqual(venueSide.body);
     expect((await request(app).get('/api/overview').set('Cookie', cookie)).status).toBe(403);
   });
 });

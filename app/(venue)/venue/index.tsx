@@ -4,7 +4,7 @@ import { PageTitle } from '@/components/ui/page-title';
 export default function VenueHomeRoute() {
   return (
     <>
-      <PageTitle title="Consignments · Saggar" />
+      <PageTitle title="Counter · Saggar" />
       <VenueHomeScreen />
     </>
   );

@@ -27,6 +27,7 @@ import { ChecklistStep } from './checklist-step';
 import { DetailsEditor } from './details-editor';
 import { DispatchCheck } from './dispatch-check';
 import { DocumentLinks } from './document-links';
+import { LineTallies } from './line-tallies';
 import { MoneyBar } from './money-bar';
 import { PieceRow } from './piece-row';
 import { TermsEditor } from './terms-editor';
@@ -57,6 +58,8 @@ function Body({ consignment }: { consignment: Consignment }) {
   const c = consignment;
   const draft = c.state === 'draft';
   const lines = c.lines.filter((l) => l.state !== 'withdrawn');
+  const running = c.state === 'dispatched' || c.state === 'on-show';
+  const count = (state: string) => c.lines.filter((l) => l.state === state).length;
   const unchecked = lines.filter((l) => l.state === 'consigned' && !l.dispatchCheck);
   const examiner = me.data?.user.name ?? '';
   const status = (done: boolean, current: boolean): StepStatus =>
@@ -133,7 +136,8 @@ function Body({ consignment }: { consignment: Consignment }) {
           }
         >
           <View role="list" style={styles.pieces}>
-            {lines.map((line) => (
+            {/* A piece withdrawn after sending stays listed, with when and why. */}
+            {c.lines.map((line) => (
               <PieceRow key={line.id} consignment={c} line={line}>
                 <DispatchCheck consignment={c} line={line} examinerName={examiner} />
               </PieceRow>
@@ -238,13 +242,27 @@ function Body({ consignment }: { consignment: Consignment }) {
 
         <ChecklistStep
           number={6}
-          title="Sales, close, statement and payment"
+          title="Sales and returns"
+          testID="step-sales"
+          status={status(reached(c, 'closed'), running)}
+          summary={
+            reached(c, 'dispatched')
+              ? `${count('consigned')} out, ${count('sold')} sold${count('returned') > 0 ? `, ${count('returned')} returned` : ''}.${running ? ' The venue records what sells; a sale phoned in, a return or a withdrawal goes in beside the piece above.' : ''}`
+              : 'Once the pieces are sent, the venue records what sells and what comes back.'
+          }
+        >
+          {reached(c, 'dispatched') ? <LineTallies consignment={c} /> : null}
+        </ChecklistStep>
+
+        <ChecklistStep
+          number={7}
+          title="Close, statement and payment"
           testID="step-later"
           status={reached(c, 'settled') ? 'done' : 'later'}
           summary={
             reached(c, 'on-show')
-              ? 'While the show runs the venue records what sells; at its end every piece is resolved, the statement issued and paid.'
-              : 'Once the pieces are on show.'
+              ? 'At the end of the show every piece is accounted for, the statement issued and paid.'
+              : 'Once the show is over.'
           }
         />
       </View>

@@ -13,9 +13,13 @@ import { formatMoney } from '@/shared/money/format';
 import { venueKeeps } from '@/shared/money/split';
 import { type Consignment, type ConsignmentLine } from '@/shared/schemas/consignment';
 
+import { PieceOutcome, showRunning } from '../sale/piece-outcome';
 import { PriceEditor } from './price-editor';
 
-/** One piece on the consignment: what it is, its price and split, its insurance, and its check. */
+/**
+ * One piece on the consignment: what it is, its price and split, its insurance, what became of it
+ * (sold, returned…) with what can still be done while the show runs, and its check.
+ */
 export function PieceRow({
   consignment,
   line,
@@ -29,6 +33,8 @@ export function PieceRow({
   const remove = useLineRemoveMutation(consignment.id);
   const draft = consignment.state === 'draft';
   const split = line.split;
+  const out = line.state === 'consigned';
+  const outcome = showRunning(consignment.state) || !out;
   return (
     <View style={styles.row} testID={`piece-${line.id}`} role="listitem">
       <View style={styles.top}>
@@ -54,7 +60,7 @@ export function PieceRow({
       ) : (
         <Text variant="number">{`${formatMoney(line.listPrice)} list price`}</Text>
       )}
-      {split ? (
+      {!out ? null : split ? (
         <Text variant="small" testID={`piece-${line.id}-split`}>
           {`A sale at list price: the venue keeps ${formatMoney(venueKeeps(consignment.terms, split))} (commission ${formatMoney(split.commission)}${split.vatOnCommission.amount > 0 ? `, VAT ${formatMoney(split.vatOnCommission)}` : ''}); you get ${formatMoney(split.makerShare)}. Insured at ${formatMoney(line.insuranceValue)}.`}
         </Text>
@@ -67,6 +73,14 @@ export function PieceRow({
         <Text variant="small" testID={`piece-${line.id}-heavy`}>
           {`Heavy: ${(line.weightG / 1000).toLocaleString('en-GB')} kg. The sheet and label carry a handling note.`}
         </Text>
+      ) : null}
+      {outcome ? (
+        <PieceOutcome
+          line={line}
+          consignment={consignment}
+          side="studio"
+          testID={`piece-${line.id}-outcome`}
+        />
       ) : null}
       {children}
       {draft ? (

@@ -20,6 +20,16 @@ function withNewTabLinks(html: string): string {
   return /<head[^>]*>/i.test(html) ? html.replace(/<head[^>]*>/i, (h) => h + base) : base + html;
 }
 
+const inlinePicture = /(<img\b[^>]*?)\s+src\s*=\s*(["'])cid:[^"']*\2/gi;
+
+/**
+ * Pictures carried inside the message (`cid:`) are its attachments, which the page lists below:
+ * the frame shows their descriptions instead of asking for addresses that lead nowhere.
+ */
+function withoutInlinePictures(html: string): string {
+  return html.replace(inlinePicture, '$1');
+}
+
 /**
  * Web: the HTML part as the recipient sees it, in a sandboxed frame (no scripts, no forms, an
  * origin of its own, so the message can neither run nor reach the app), or the plain-text part.
@@ -43,7 +53,7 @@ export function MessageBody({ text, html, testID }: MessageBodyProps) {
           data-testid={`${testID}-html`}
           sandbox="allow-popups allow-popups-to-escape-sandbox"
           referrerPolicy="no-referrer"
-          srcDoc={withNewTabLinks(html)}
+          srcDoc={withNewTabLinks(withoutInlinePictures(html))}
           style={frameStyle}
         />
       ) : (

@@ -50,13 +50,14 @@ function Outcome({ message, timeZone }: { message: OutboxMessage; timeZone: stri
     );
   }
   if (message.attempts === 0) {
-    return (
-      <Notice
-        tone="info"
-        testID="message-waiting"
-        message="Waiting to go: it is sent in a moment."
-      />
-    );
+    // Written to go later: a sale e-mail is held a couple of minutes, so sales recorded
+    // together go as one message.
+    const held =
+      message.nextAttemptAt !== null &&
+      Date.parse(message.nextAttemptAt) > Date.parse(message.createdAt)
+        ? `Waiting to go at ${formatDateTime(message.nextAttemptAt, timeZone)}${message.kind === 'sale' ? ': sales recorded within a few minutes of each other go as one message.' : '.'}`
+        : 'Waiting to go: it is sent in a moment.';
+    return <Notice tone="info" testID="message-waiting" message={held} />;
   }
   const next = message.nextAttemptAt ? formatDateTime(message.nextAttemptAt, timeZone) : 'soon';
   return (

@@ -10,10 +10,11 @@ import { type Overview } from '@/shared/schemas/overview';
 
 import { Exposure } from './exposure';
 import { Figure } from './figure';
+import { RecentSales } from './recent-sales';
 import { StatusList } from './status-list';
 
 function OverviewBody({ overview }: { overview: Overview }) {
-  const { works, venues, consignments, exposure } = overview;
+  const { works, venues, consignments, exposure, recentSales } = overview;
   if (works.total === 0 && venues.total === 0 && consignments.outCount === 0) {
     return (
       <EmptyView
@@ -37,6 +38,10 @@ function OverviewBody({ overview }: { overview: Overview }) {
       <View style={styles.section}>
         <Heading level={2}>At risk</Heading>
         <Exposure exposure={exposure} />
+      </View>
+      <View style={styles.section}>
+        <Heading level={2}>Recent sales</Heading>
+        <RecentSales sales={recentSales} />
       </View>
       <View style={styles.section}>
         <Heading level={2}>Where the work is</Heading>

@@ -14,7 +14,8 @@ import { TextLink } from '@/components/ui/text-link';
 import { consignmentStateLooks, lineStateLooks } from '@/constants/states';
 import { palette, spacing } from '@/constants/theme';
 import { errorMessage } from '@/hooks/api-errors';
-import { useAcknowledgeMutation, useConsignmentQuery } from '@/hooks/queries/consignments';
+import { useAcknowledgeMutation } from '@/hooks/queries/consignments';
+import { useVenueConsignmentQuery } from '@/hooks/queries/venue-home';
 import { useMeQuery } from '@/hooks/session';
 import { formatMoney } from '@/shared/money/format';
 import { type Consignment } from '@/shared/schemas/consignment';
@@ -27,6 +28,7 @@ import { today } from '../condition-check/today';
 import { DocumentLinks } from '../consignment/document-links';
 import { TermsInWords } from '../consignment-form/terms-in-words';
 import { type ArrivalCheck, ArrivalPiece } from './arrival-piece';
+import { TillReceipt } from './till-receipt';
 
 function Acknowledge({ consignment }: { consignment: Consignment }) {
   const me = useMeQuery();
@@ -116,9 +118,23 @@ function Pieces({ consignment }: { consignment: Consignment }) {
                 />
                 <View style={styles.what}>
                   <Text variant="small">{line.stockNumber}</Text>
-                  <Text variant="bodyStrong">{line.title}</Text>
+                  <TextLink
+                    href={{
+                      pathname: '/venue/piece/[lineId]',
+                      params: { lineId: String(line.id) },
+                    }}
+                    label={line.title}
+                    testID={`venue-piece-${line.id}-open`}
+                  />
                   <Text variant="number">{formatMoney(line.listPrice)}</Text>
                   <StateMark look={lineStateLooks[line.state]} />
+                  {line.sale ? (
+                    <Text variant="small">
+                      {`Sold ${formatDate(line.sale.soldOn)} for ${formatMoney(line.sale.price)}`}
+                    </Text>
+                  ) : line.resolution ? (
+                    <Text variant="small">{formatDate(line.resolution.on)}</Text>
+                  ) : null}
                 </View>
               </View>
               {line.arrivalCheck ? (
@@ -137,15 +153,15 @@ function Pieces({ consignment }: { consignment: Consignment }) {
 
 /** A consignment on the venue's side: what was sent, its terms, and arrival to acknowledge. */
 export function VenueConsignmentScreen({ id }: { id: number }) {
-  const query = useConsignmentQuery(id);
+  const query = useVenueConsignmentQuery(id);
   const c = query.data;
   return (
     <Screen testID="venue-consignment-screen">
       <View style={styles.heading}>
-        <TextLink href="/venue" label="All consignments" />
+        <TextLink href="/venue" label="The counter" />
         {c ? (
           <>
-            <Text variant="small">{c.reference}</Text>
+            <Text variant="small">{`${c.reference} · from ${c.studio.name}`}</Text>
             <Heading level={1}>{c.title}</Heading>
             <StateMark look={consignmentStateLooks[c.state]} />
             <Text variant="small">
@@ -167,7 +183,10 @@ export function VenueConsignmentScreen({ id }: { id: number }) {
           {query.data.state === 'dispatched' ? (
             <Acknowledge consignment={query.data} />
           ) : (
-            <Pieces consignment={query.data} />
+            <>
+              {query.data.state === 'on-show' ? <TillReceipt consignment={query.data} /> : null}
+              <Pieces consignment={query.data} />
+            </>
           )}
           {query.data.acknowledgedAt ? (
             <Text variant="small" testID="venue-acknowledged">

@@ -3,6 +3,18 @@ import sharp from 'sharp';
 
 import { demoSignIns } from '@/server/demo/demo-studio';
 
+/** Fills in the sign-in form already on the page and sends it, as a person would. */
+export async function fillSignIn(
+  page: Page,
+  email: string,
+  password: string = demoSignIns.password,
+) {
+  await page.getByTestId('sign-in-screen').waitFor();
+  await page.getByTestId('sign-in-email').fill(email);
+  await page.getByTestId('sign-in-password').fill(password);
+  await page.getByTestId('sign-in-submit').click();
+}
+
 /** Signs in through the form, as a person would, and waits for the studio's overview. */
 export async function signInToStudio(
   page: Page,
@@ -10,10 +22,7 @@ export async function signInToStudio(
   email: string = demoSignIns.people[0].email,
 ) {
   await page.goto(`${url}/sign-in`);
-  await page.getByTestId('sign-in-screen').waitFor();
-  await page.getByTestId('sign-in-email').fill(email);
-  await page.getByTestId('sign-in-password').fill(demoSignIns.password);
-  await page.getByTestId('sign-in-submit').click();
+  await fillSignIn(page, email);
   await page.getByTestId('overview-screen').waitFor();
 }
 

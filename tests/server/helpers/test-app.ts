@@ -24,7 +24,10 @@ export const password = 'correct horse battery staple';
  */
 export async function createTestApp(
   options: Partial<
-    Pick<AppContext, 'signInLimit' | 'trustProxy' | 'mailFrom' | 'renderAttachment' | 'appUrl'>
+    Pick<
+      AppContext,
+      'signInLimit' | 'trustProxy' | 'mailFrom' | 'renderAttachment' | 'appUrl' | 'filesDir'
+    >
   > & { publicUrl?: string; dbFile?: string } = {},
 ) {
   const { dbFile = ':memory:', ...contextOptions } = options;
@@ -36,7 +39,7 @@ export async function createTestApp(
     secret: 'test-secret-that-is-long-enough-for-better-auth',
     web: null,
     trustedOrigins: [],
-    // Created on the first upload; each app has its own, so tests never share stored files.
+    // Created on the first upload; each app has its own unless given one (a copy of another's).
     filesDir: path.join(os.tmpdir(), 'saggar-test-files', randomUUID()),
     ...contextOptions,
   });

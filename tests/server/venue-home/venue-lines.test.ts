@@ -1,5 +1,6 @@
 import request from 'supertest';
 
+import { isoDateInTimeZone } from '@/shared/money';
 import { venuePieceSchema } from '@/shared/schemas/consignment';
 
 import {
@@ -8,6 +9,7 @@ import {
   consignmentFixture,
   dispatchedWith,
   draftWith,
+  galleryTerms,
 } from '../helpers/consignment-fixture';
 import { addConsignment, insertLine, insertWork } from '../helpers/studio-fixture';
 import { addPerson, addVenue, signIn } from '../helpers/test-app';
@@ -29,6 +31,8 @@ describe('GET /api/venue/lines/:lineId', () => {
     const sent = await dispatchedWith(f, [f.works[0]!, f.works[1]!]);
     const consignment = await as(f, 'gallery').get(`/api/consignments/${sent.id}`);
     expect(consignment.status).toBe(200);
+    // Sending dates the consignment the day it happens, in the studio's time zone (docs/states.md).
+    const today = isoDateInTimeZone(new Date(), 'Europe/London');
     for (const [i, line] of sent.lines.entries()) {
       const res = await piece(f, line.id);
       expect(res.status).toBe(200);
@@ -40,6 +44,10 @@ describe('GET /api/venue/lines/:lineId', () => {
           reference: sent.reference,
           title: 'Winter show',
           state: 'dispatched',
+          // What a sale from the label needs: its earliest day, the terms agreed, and today.
+          dispatchDate: today,
+          terms: galleryTerms,
+          today,
         },
         // The same line the consignment's page shows the venue, prices and checks included.
         line: consignment.body.lines[i],
