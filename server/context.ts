@@ -7,6 +7,7 @@ import { type Db } from './db/database';
 import { documentAttachmentKinds } from './documents/document-attachments';
 import { type AttachmentRenderer, attachmentRenderer } from './mail/attachments';
 import { defaultMailFrom } from './mail/transport';
+import { type PaymentProvider } from './payments/payment-provider';
 import { photoAttachmentKinds } from './photos/photo-attachments';
 
 /** Everything the app needs from outside, so tests can build it over an in-memory database. */
@@ -39,6 +40,11 @@ export type AppContext = {
    * shows what was sent; refuses a kind nobody registered.
    */
   renderAttachment: AttachmentRenderer;
+  /**
+   * The payment provider's SDK and webhook secret: the real service, or the local stand-in
+   * `server/index.ts` starts; null where nobody set one up (online payment is then refused).
+   */
+  payments: PaymentProvider | null;
 };
 
 export type ContextOptions = Omit<
@@ -51,11 +57,15 @@ export type ContextOptions = Omit<
   | 'mailFrom'
   | 'renderAttachment'
   | 'appUrl'
+  | 'payments'
 > &
   Pick<AuthOptions, 'secret'> &
   Partial<Pick<AuthOptions, 'publicUrl'>> &
   Partial<
-    Pick<AppContext, 'signInLimit' | 'trustProxy' | 'mailFrom' | 'renderAttachment' | 'appUrl'>
+    Pick<
+      AppContext,
+      'signInLimit' | 'trustProxy' | 'mailFrom' | 'renderAttachment' | 'appUrl' | 'payments'
+    >
   >;
 
 export function createContext(options: ContextOptions): AppContext {
@@ -69,6 +79,7 @@ export function createContext(options: ContextOptions): AppContext {
     signInLimit: { perAccount: 10, perAddress: 50, windowMs: 15 * 60 * 1000 },
     trustProxy: false,
     mailFrom: defaultMailFrom,
+    payments: null,
     renderAttachment: attachmentRenderer({
       ...documentAttachmentKinds({ filesDir: options.filesDir, appUrl }),
       ...photoAttachmentKinds({ filesDir: options.filesDir }),

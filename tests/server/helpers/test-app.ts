@@ -24,7 +24,16 @@ export const password = 'correct horse battery staple';
  */
 export async function createTestApp(
   options: Partial<
-    Pick<AppContext, 'signInLimit' | 'trustProxy' | 'mailFrom' | 'renderAttachment' | 'appUrl'>
+    Pick<
+      AppContext,
+      | 'signInLimit'
+      | 'trustProxy'
+      | 'mailFrom'
+      | 'renderAttachment'
+      | 'appUrl'
+      | 'payments'
+      | 'logger'
+    >
   > & { publicUrl?: string; dbFile?: string } = {},
 ) {
   const { dbFile = ':memory:', ...contextOptions } = options;
