@@ -6,6 +6,8 @@ export const publicRoutes = [
   'POST /api/auth/sign-in/email',
   'GET /api/invitations/lookup',
   'POST /api/invitations/accept',
+  // The payment provider's notices: no session, but a signature checked over the raw body.
+  'POST /api/payments/webhook',
 ] as const;
 
 /**
@@ -86,6 +88,8 @@ export const protectedRoutes: {
     route: 'POST /api/consignment-lines/:lineId/condition-reports',
     roles: ['owner', 'assistant', 'gallery'],
   },
+  // The assistant's 403 is checked in tests/server/payments.
+  { route: 'POST /api/statements/:id/checkout', roles: ['owner', 'gallery'] },
   { route: 'GET /api/outbox', roles: ['owner'] },
   { route: 'GET /api/outbox/:id', roles: ['owner'] },
   { route: 'GET /api/outbox/:id/attachments/:index', roles: ['owner'] },
