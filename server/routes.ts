@@ -14,6 +14,7 @@ import { invitationsRouter } from './invitations/invitations.router';
 import { outboxRouter } from './mail/outbox.router';
 import { meRouter } from './me/me.router';
 import { overviewRouter } from './overview/overview.router';
+import { checkoutRouter, paymentsWebhookRouter } from './payments/payments.router';
 import { photoFilesRouter, workPhotosRouter } from './photos/photos.router';
 import { quotesRouter } from './quotes/quotes.router';
 import { consignmentSalesRouter, lineSalesRouter } from './sales/sales.router';
@@ -32,6 +33,9 @@ export function mountApi(app: Express, context: AppContext): void {
   app.use('/api/health', healthRouter);
 
   app.use('/api/auth', authRouter(context, resolveViewer));
+  // The provider's webhook is signed over its raw bytes: it reads its own body, before the JSON
+  // parser below, and has no session.
+  app.use('/api/payments', paymentsWebhookRouter(context));
 
   // A CSV import is up to 2 MB of text, JSON-escaped: more than the global limit. Read here,
   // only for the studio roles, the body is then skipped by the global parser below.
@@ -59,6 +63,7 @@ export function mountApi(app: Express, context: AppContext): void {
   app.use('/api/consignment-lines/:lineId/condition-reports', conditionReportsRouter(context));
   app.use('/api/condition-photos', conditionPhotosRouter(context));
   app.use('/api/invitations', invitationsRouter(context));
+  app.use('/api/statements/:id/checkout', checkoutRouter(context));
   app.use('/api/statements', statementsRouter(context));
   app.use('/api/year', yearRouter(context));
   app.use('/api/outbox', outboxRouter(context));

@@ -188,6 +188,10 @@ export async function listPayments(db: Db, scope: Scope, statementId: number) {
     .execute();
 }
 
+/**
+ * Records a payment received. One the provider reports carries its payment's id, which is
+ * unique: the same payment reported again inserts nothing and answers undefined.
+ */
 export async function insertPayment(
   db: Db,
   scope: Scope,
@@ -199,9 +203,10 @@ export async function insertPayment(
     method: 'bank-transfer' | 'cheque' | 'cash' | 'online';
     receivedOn: string;
     reference: string | null;
+    providerPaymentId?: string | null;
   },
-) {
-  const { id } = await db
+): Promise<number | undefined> {
+  const inserted = await db
     .insertInto('payments')
     .values({
       studio_id: scope.studioId,
@@ -213,11 +218,13 @@ export async function insertPayment(
       state: 'received',
       received_on: payment.receivedOn,
       reference: payment.reference,
+      provider_payment_id: payment.providerPaymentId ?? null,
       recorded_by: scope.userId,
     })
+    .onConflict((oc) => oc.column('provider_payment_id').doNothing())
     .returning('id')
-    .executeTakeFirstOrThrow();
-  return id;
+    .executeTakeFirst();
+  return inserted?.id;
 }
 
 export async function listAdjustments(db: Db, scope: Scope, statementId: number) {

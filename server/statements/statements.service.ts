@@ -3,6 +3,7 @@ import { type Money } from '@/shared/schemas/money';
 import {
   type AdjustmentCreate,
   type PaymentCreate,
+  type PaymentMethod,
   type Statement,
   type StatementList,
 } from '@/shared/schemas/statement';
@@ -377,6 +378,52 @@ async function issuedStatement(trx: Db, scope: Scope, id: number, doing: string)
   return statement;
 }
 
+/**
+ * Records a payment against a statement, audited, and settles the statement (and its
+ * consignment) when the balance comes to nil: the one path for a remittance recorded by hand and
+ * a payment taken online. Undefined when the provider's payment is recorded already, and then
+ * nothing is written.
+ */
+async function takePayment(
+  trx: Db,
+  scope: Scope,
+  statement: Statement,
+  payment: {
+    amount: number;
+    method: PaymentMethod;
+    receivedOn: string;
+    reference: string | null;
+    providerPaymentId?: string;
+  },
+): Promise<number | undefined> {
+  const paymentId = await insertPayment(trx, scope, {
+    venueId: statement.venue.id,
+    statementId: statement.id,
+    amount: payment.amount,
+    currency: statement.currency,
+    method: payment.method,
+    receivedOn: payment.receivedOn,
+    reference: payment.reference,
+    providerPaymentId: payment.providerPaymentId,
+  });
+  if (paymentId === undefined) return undefined;
+  await writeAudit(trx, scope, {
+    action: 'payment.recorded',
+    entity: 'statement',
+    entityId: statement.id,
+    before: { balance: statement.balance },
+    after: {
+      paymentId,
+      amount: { amount: payment.amount, currency: statement.currency },
+      method: payment.method,
+      on: payment.receivedOn,
+      ...(payment.providerPaymentId ? { providerPaymentId: payment.providerPaymentId } : {}),
+    },
+  });
+  await settleIfPaid(trx, scope, await getStatement(trx, scope, statement.id));
+  return paymentId;
+}
+
 /** A remittance received by hand; the statement is settled when the balance comes to nil. */
 export async function recordPayment(
   db: Db,
@@ -394,25 +441,53 @@ export async function recordPayment(
         },
       ]);
     }
-    const paymentId = await insertPayment(trx, scope, {
-      venueId: statement.venue.id,
-      statementId: id,
+    await takePayment(trx, scope, statement, {
       amount: input.amount.amount,
-      currency: statement.currency,
       method: input.method,
       receivedOn: input.receivedOn,
       reference: input.reference ?? null,
     });
-    await writeAudit(trx, scope, {
-      action: 'payment.recorded',
-      entity: 'statement',
-      entityId: id,
-      before: { balance: statement.balance },
-      after: { paymentId, amount: input.amount, method: input.method, on: input.receivedOn },
-    });
-    await settleIfPaid(trx, scope, await getStatement(trx, scope, id));
   });
   return getStatement(db, scope, id);
+}
+
+export type OnlinePaymentOutcome =
+  | { outcome: 'recorded'; statement: Statement }
+  | { outcome: 'duplicate' }
+  | { outcome: 'refused'; reason: string };
+
+/**
+ * A payment the provider reports taken online, recorded once however often it is reported: its
+ * id is unique, and a second report inserts nothing. Money already taken is recorded even
+ * against a statement settled meanwhile, whose balance then shows what to give back.
+ */
+export async function recordOnlinePayment(
+  db: Db,
+  scope: Scope,
+  id: number,
+  payment: { amount: Money; receivedOn: string; providerPaymentId: string },
+): Promise<OnlinePaymentOutcome> {
+  return db.transaction().execute(async (trx): Promise<OnlinePaymentOutcome> => {
+    const statement = await getStatement(trx, scope, id);
+    if (statement.state !== 'issued' && statement.state !== 'settled') {
+      return { outcome: 'refused', reason: `${statement.reference} is ${statement.state}` };
+    }
+    if (payment.amount.currency !== statement.currency) {
+      return {
+        outcome: 'refused',
+        reason: `${statement.reference} is in ${statement.currency}, the payment in ${payment.amount.currency}`,
+      };
+    }
+    const paymentId = await takePayment(trx, scope, statement, {
+      amount: payment.amount.amount,
+      method: 'online',
+      receivedOn: payment.receivedOn,
+      reference: payment.providerPaymentId,
+      providerPaymentId: payment.providerPaymentId,
+    });
+    if (paymentId === undefined) return { outcome: 'duplicate' };
+    return { outcome: 'recorded', statement: await getStatement(trx, scope, id) };
+  });
 }
 
 /** Part of a difference between the balance and what was paid, explained by the maker. */

@@ -41,6 +41,7 @@ export const paymentMethods = ['bank-transfer', 'cheque', 'cash', 'online'] as c
 export const paymentMethodSchema = z.enum(paymentMethods, {
   error: 'Choose how it was paid: bank transfer, cheque, cash or online.',
 });
+export type PaymentMethod = z.infer<typeof paymentMethodSchema>;
 
 /** `POST /api/statements/:id/payments`: a remittance received, recorded by hand. */
 export const paymentCreateSchema = z.strictObject({
@@ -158,3 +159,10 @@ export const statementListSchema = z.object({
   ),
 });
 export type StatementList = z.infer<typeof statementListSchema>;
+
+/**
+ * `POST /api/statements/:id/checkout`: where to send the venue to pay the balance online, the
+ * payment provider's hosted checkout page.
+ */
+export const checkoutSchema = z.object({ url: z.url() });
+export type Checkout = z.infer<typeof checkoutSchema>;
