@@ -2,6 +2,7 @@ import express, { type Express } from 'express';
 
 import { authenticate, requireRole } from './access/authenticate';
 import { authRouter } from './auth/auth.router';
+import { calendarFeedRouter, calendarRouter } from './calendar/calendar.router';
 import { conditionReportsRouter } from './condition/condition.router';
 import { conditionPhotosRouter } from './condition/condition-photos.router';
 import { consignmentsRouter } from './consignments/consignments.router';
@@ -33,6 +34,7 @@ export function mountApi(app: Express, context: AppContext): void {
   app.use('/api/health', healthRouter);
 
   app.use('/api/auth', authRouter(context, resolveViewer));
+  app.use('/api/calendar', calendarRouter(context));
   // The provider's webhook is signed over its raw bytes: it reads its own body, before the JSON
   // parser below, and has no session.
   app.use('/api/payments', paymentsWebhookRouter(context));
@@ -66,6 +68,7 @@ export function mountApi(app: Express, context: AppContext): void {
   app.use('/api/statements/:id/checkout', checkoutRouter(context));
   app.use('/api/statements', statementsRouter(context));
   app.use('/api/year', yearRouter(context));
+  app.use('/api/calendar-feed', calendarFeedRouter(context));
   app.use('/api/outbox', outboxRouter(context));
 
   app.use('/api', apiNotFound);

@@ -1,5 +1,6 @@
 import { type AccountsTable } from './accounts';
 import { type AuditLogTable } from './audit-log';
+import { type CalendarFeedsTable } from './calendar-feeds';
 import { type ConditionFindingsTable, type ConditionReportsTable } from './condition-reports';
 import { type ConsignmentLinesTable, type ConsignmentsTable } from './consignments';
 import { type FilesTable } from './files';
@@ -43,4 +44,5 @@ export interface Database {
   outbox: OutboxTable;
   audit_log: AuditLogTable;
   sign_in_limits: SignInLimitsTable;
+  calendar_feeds: CalendarFeedsTable;
 }

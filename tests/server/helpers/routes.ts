@@ -6,6 +6,7 @@ export const publicRoutes = [
   'POST /api/auth/sign-in/email',
   'GET /api/invitations/lookup',
   'POST /api/invitations/accept',
+  'GET /api/calendar/:token.ics',
   // The payment provider's notices: no session, but a signature checked over the raw body.
   'POST /api/payments/webhook',
 ] as const;
@@ -64,6 +65,9 @@ export const protectedRoutes: {
   { route: 'POST /api/consignments/:id/close', roles: ['owner', 'assistant'] },
   { route: 'GET /api/consignment-lines/:lineId/claim.pdf', roles: ['owner', 'assistant'] },
   { route: 'GET /api/year', roles: ['owner'] },
+  { route: 'GET /api/calendar-feed', roles: ['owner'] },
+  { route: 'POST /api/calendar-feed', roles: ['owner'] },
+  { route: 'DELETE /api/calendar-feed', roles: ['owner'] },
   { route: 'GET /api/year/sales.csv', roles: ['owner'] },
   { route: 'GET /api/year/payments.csv', roles: ['owner'] },
   { route: 'GET /api/year/statements.csv', roles: ['owner'] },
