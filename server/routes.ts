@@ -2,6 +2,7 @@ import express, { type Express } from 'express';
 
 import { authenticate, requireRole } from './access/authenticate';
 import { authRouter } from './auth/auth.router';
+import { bankImportsRouter } from './bank-imports/bank-imports.router';
 import { calendarFeedRouter, calendarRouter } from './calendar/calendar.router';
 import { conditionReportsRouter } from './condition/condition.router';
 import { conditionPhotosRouter } from './condition/condition-photos.router';
@@ -47,6 +48,13 @@ export function mountApi(app: Express, context: AppContext): void {
     requireRole('owner', 'assistant'),
     express.json({ limit: '6mb' }),
   );
+  // A bank statement is up to 1 MB of CSV: the owner's only, read here like an import.
+  app.post(
+    '/api/bank-imports/matches',
+    resolveViewer,
+    requireRole('owner'),
+    express.json({ limit: '3mb' }),
+  );
   app.use('/api', express.json({ limit: '100kb' }), resolveViewer);
   app.use('/api/me', meRouter(context));
   app.use('/api/overview', overviewRouter(context));
@@ -69,6 +77,7 @@ export function mountApi(app: Express, context: AppContext): void {
   app.use('/api/statements', statementsRouter(context));
   app.use('/api/year', yearRouter(context));
   app.use('/api/calendar-feed', calendarFeedRouter(context));
+  app.use('/api/bank-imports', bankImportsRouter(context));
   app.use('/api/outbox', outboxRouter(context));
 
   app.use('/api', apiNotFound);

@@ -7,6 +7,7 @@ import * as m004 from './004-outbox-delivery';
 import * as m005 from './005-sales';
 import * as m006 from './006-statements';
 import * as m007 from './007-calendar-feeds';
+import * as m008 from './008-bank-columns';
 
 /** Every migration, in order. A new one is a new file and one more line here. */
 export const migrations: Record<string, Migration> = {
@@ -17,4 +18,5 @@ export const migrations: Record<string, Migration> = {
   '005-sales': m005,
   '006-statements': m006,
   '007-calendar-feeds': m007,
+  '008-bank-columns': m008,
 };

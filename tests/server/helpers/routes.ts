@@ -66,6 +66,7 @@ export const protectedRoutes: {
   { route: 'GET /api/consignment-lines/:lineId/claim.pdf', roles: ['owner', 'assistant'] },
   { route: 'GET /api/year', roles: ['owner'] },
   { route: 'GET /api/calendar-feed', roles: ['owner'] },
+  { route: 'POST /api/bank-imports/matches', roles: ['owner'] },
   { route: 'POST /api/calendar-feed', roles: ['owner'] },
   { route: 'DELETE /api/calendar-feed', roles: ['owner'] },
   { route: 'GET /api/year/sales.csv', roles: ['owner'] },
