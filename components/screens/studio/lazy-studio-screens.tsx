@@ -21,6 +21,9 @@ function lazyScreen<Props extends object>(pick: () => Promise<ComponentType<Prop
   };
 }
 
+export const BankImportScreen = lazyScreen(
+  async () => (await loadStudioScreens()).BankImportScreen,
+);
 export const MailScreen = lazyScreen(async () => (await loadStudioScreens()).MailScreen);
 export const MailMessageScreen = lazyScreen(
   async () => (await loadStudioScreens()).MailMessageScreen,

@@ -1,5 +1,6 @@
 // Every screen of the studio side. Imported only through `lazy-studio-screens.tsx`, so that they
 // and everything only they use (forms, tables, photos, money rules) load together as one chunk.
+export { BankImportScreen } from '../bank-import/bank-import-screen';
 export { ConsignmentScreen } from '../consignment/consignment-screen';
 export { ConsignmentCreateScreen } from '../consignment-form/consignment-create-screen';
 export { ConsignmentsScreen } from '../consignments/consignments-screen';
