@@ -167,29 +167,31 @@ export async function getStatement(db: Db, scope: Scope, id: number): Promise<St
   };
 }
 
+/**
+ * Every statement the person may see, with what is owed and what is left: each worked out as its
+ * page shows it (a draft from its sales), so the list and the page never disagree.
+ */
 export async function listStatements(db: Db, scope: Scope): Promise<StatementList> {
   const rows = await listStatementRows(db, scope);
-  return {
-    items: rows.map((row) => ({
-      id: row.id,
-      reference: row.reference,
-      state: row.state,
-      currency: row.currency,
-      venue: { id: row.venue_id, name: row.venue_name },
-      consignment:
-        row.consignment_id === null
-          ? null
-          : {
-              id: row.consignment_id,
-              reference: row.consignment_reference!,
-              title: row.consignment_title!,
-            },
-      periodStart: row.period_start,
-      periodEnd: row.period_end,
-      issuedAt: row.issued_at,
-      dueDate: row.due_date,
-    })),
-  };
+  const items: StatementList['items'] = [];
+  for (const row of rows) {
+    const s = await getStatement(db, scope, row.id);
+    items.push({
+      id: s.id,
+      reference: s.reference,
+      state: s.state,
+      currency: s.currency,
+      venue: s.venue,
+      consignment: s.consignment,
+      periodStart: s.periodStart,
+      periodEnd: s.periodEnd,
+      issuedAt: s.issuedAt,
+      dueDate: s.dueDate,
+      owed: s.totals.makerShare,
+      balance: s.balance,
+    });
+  }
+  return { items };
 }
 
 /**

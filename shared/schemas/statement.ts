@@ -144,18 +144,22 @@ export type Statement = z.infer<typeof statementSchema>;
 /** `GET /api/statements` */
 export const statementListSchema = z.object({
   items: z.array(
-    statementSchema.pick({
-      id: true,
-      reference: true,
-      state: true,
-      currency: true,
-      venue: true,
-      consignment: true,
-      periodStart: true,
-      periodEnd: true,
-      issuedAt: true,
-      dueDate: true,
-    }),
+    statementSchema
+      .pick({
+        id: true,
+        reference: true,
+        state: true,
+        currency: true,
+        venue: true,
+        consignment: true,
+        periodStart: true,
+        periodEnd: true,
+        issuedAt: true,
+        dueDate: true,
+        balance: true,
+      })
+      // The maker's share the statement covers.
+      .extend({ owed: moneySchema }),
   ),
 });
 export type StatementList = z.infer<typeof statementListSchema>;

@@ -55,3 +55,8 @@ export const WorkImportScreen = lazyScreen(
   async () => (await loadStudioScreens()).WorkImportScreen,
 );
 export const WorksScreen = lazyScreen(async () => (await loadStudioScreens()).WorksScreen);
+export const StatementScreen = lazyScreen(async () => (await loadStudioScreens()).StatementScreen);
+export const StatementsScreen = lazyScreen(
+  async () => (await loadStudioScreens()).StatementsScreen,
+);
+export const YearScreen = lazyScreen(async () => (await loadStudioScreens()).YearScreen);
