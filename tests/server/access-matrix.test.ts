@@ -698,6 +698,35 @@ const matrix: Row[] = [
     call: () => get('/api/year/statements.csv?year=2026'),
     expect: ownerOnly(200),
   },
+  {
+    route: 'GET /api/calendar-feed',
+    call: () => get('/api/calendar-feed'),
+    expect: ownerOnly(200),
+  },
+  {
+    route: 'POST /api/calendar-feed',
+    call: () => post('/api/calendar-feed'),
+    expect: ownerOnly(201),
+  },
+  {
+    route: 'DELETE /api/calendar-feed',
+    call: () => ({ method: 'delete', path: '/api/calendar-feed' }),
+    expect: ownerOnly(200),
+  },
+  {
+    // Public (a calendar program signs in to nothing): an address nobody made is not found.
+    route: 'GET /api/calendar/:token.ics',
+    call: () => get(`/api/calendar/${'a'.repeat(43)}.ics`),
+    expect: everyone(404),
+  },
+  {
+    route: 'POST /api/bank-imports/matches',
+    call: () =>
+      post('/api/bank-imports/matches', {
+        csv: 'Date,Amount,Reference\r\n2026-12-01,10.00,REMIT\r\n',
+      }),
+    expect: ownerOnly(200),
+  },
   { route: 'GET /api/outbox', call: () => get('/api/outbox'), expect: ownerOnly(200) },
   {
     route: 'GET /api/outbox/:id',
