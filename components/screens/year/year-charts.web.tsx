@@ -143,9 +143,10 @@ export function BarsChart({
     );
   });
   return (
-    <View testID={testID} role="img" aria-label={label} style={styles.chart} onLayout={onLayout}>
+    <View testID={testID} style={styles.chart} onLayout={onLayout}>
       {width > 0 ? (
         <VictoryChart
+          title={label}
           width={width}
           height={height}
           horizontal={horizontal}
@@ -182,9 +183,10 @@ export function LinesChart({
   const money = compactMoney(currency);
   const names = [...series.map((s) => s.name), ...(level ? [level.name] : [])];
   return (
-    <View testID={testID} role="img" aria-label={label} style={styles.chart} onLayout={onLayout}>
+    <View testID={testID} style={styles.chart} onLayout={onLayout}>
       {width > 0 ? (
         <VictoryChart
+          title={label}
           width={width}
           height={250}
           domainPadding={{ x: 10, y: [0, 12] }}
