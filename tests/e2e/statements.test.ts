@@ -382,6 +382,10 @@ describe('the end of a show: closed, its statement issued, paid online, and the 
       );
       expect(overflow).toBeLessThanOrEqual(0);
       await screenshot(page, `statements-year-${size}`);
+      for (const chart of ['vat', 'GBP-months', 'GBP-venues', 'GBP-series', 'GBP-exposure']) {
+        await page.getByTestId(`year-${chart}-chart`).scrollIntoViewIfNeeded();
+        await screenshot(page, `statements-year-${chart}-${size}`);
+      }
       await expectAccessible(page);
       expect(problemsOf(page)).toEqual([]);
       await page.context().close();
