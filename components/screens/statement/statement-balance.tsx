@@ -111,5 +111,5 @@ const styles = StyleSheet.create({
     borderTopColor: palette.outline,
   },
   label: { flex: 1 },
-  amount: { textAlign: 'right', fontVariant: ['tabular-nums'] },
+  amount: { flexShrink: 0, textAlign: 'right', fontVariant: ['tabular-nums'] },
 });

@@ -1,4 +1,4 @@
-import { type adjustmentKinds,type PaymentMethod  } from '@/shared/schemas/statement';
+import { type adjustmentKinds, type PaymentMethod } from '@/shared/schemas/statement';
 
 export const paymentMethodWords: Record<PaymentMethod, string> = {
   'bank-transfer': 'bank transfer',

@@ -55,6 +55,10 @@ function useWidth() {
   };
 }
 
+/** Twelve month names do not fit a phone's width side by side: there, every other one. */
+const monthTick = (label: string, index: number, width: number) =>
+  width < 560 && index % 2 === 1 ? '' : shorten(label, 5);
+
 const shorten = (text: string, max: number) =>
   text.length > max ? `${text.slice(0, max - 1)}…` : text;
 
@@ -129,7 +133,10 @@ export function BarsChart({
   const rows = categories.length;
   const height = horizontal ? Math.max(140, 56 + rows * series.length * 22 + rows * 12) : 240;
   const left = horizontal ? Math.min(150, Math.max(90, width * 0.34)) : 58;
-  const bars = series.map((s, index) => {
+  // Horizontal groups are drawn from the bottom up: reversed, the first series reads first.
+  const ordered = series.map((s, index) => ({ s, index }));
+  if (horizontal) ordered.reverse();
+  const bars = ordered.map(({ s, index }) => {
     const look = barLooks[index % barLooks.length]!;
     return (
       <VictoryBar
@@ -143,20 +150,29 @@ export function BarsChart({
     );
   });
   return (
-    <View testID={testID} role="img" aria-label={label} style={styles.chart} onLayout={onLayout}>
+    <View testID={testID} style={styles.chart} onLayout={onLayout}>
       {width > 0 ? (
         <VictoryChart
+          title={label}
           width={width}
           height={height}
           horizontal={horizontal}
-          domainPadding={{ x: horizontal ? 18 : 14, y: [0, 12] }}
+          // A group's bars spread either side of its category: room for the outer ones.
+          domainPadding={{ x: horizontal ? (series.length * 18) / 2 + 14 : 14, y: [0, 12] }}
           padding={{ top: 12, bottom: 36, left, right: 18 }}
         >
           <VictoryAxis
             style={axisStyle}
-            tickFormat={(t: string) => shorten(String(t), horizontal ? 18 : 5)}
+            tickFormat={(t: string, i: number) =>
+              horizontal ? shorten(String(t), 18) : monthTick(String(t), i, width)
+            }
           />
-          <VictoryAxis dependentAxis style={axisStyle} tickFormat={money} tickCount={4} />
+          <VictoryAxis
+            dependentAxis
+            style={axisStyle}
+            tickFormat={money}
+            tickCount={horizontal ? 3 : 4}
+          />
           {series.length > 1 ? (
             <VictoryGroup offset={horizontal ? 18 : 12}>{bars}</VictoryGroup>
           ) : (
@@ -182,15 +198,19 @@ export function LinesChart({
   const money = compactMoney(currency);
   const names = [...series.map((s) => s.name), ...(level ? [level.name] : [])];
   return (
-    <View testID={testID} role="img" aria-label={label} style={styles.chart} onLayout={onLayout}>
+    <View testID={testID} style={styles.chart} onLayout={onLayout}>
       {width > 0 ? (
         <VictoryChart
+          title={label}
           width={width}
           height={250}
           domainPadding={{ x: 10, y: [0, 12] }}
           padding={{ top: 12, bottom: 36, left: 58, right: 18 }}
         >
-          <VictoryAxis style={axisStyle} tickFormat={(t: string) => shorten(String(t), 5)} />
+          <VictoryAxis
+            style={axisStyle}
+            tickFormat={(t: string, i: number) => monthTick(String(t), i, width)}
+          />
           <VictoryAxis dependentAxis style={axisStyle} tickFormat={money} tickCount={4} />
           {series.flatMap((s, index) => {
             const look = lineLooks[index % lineLooks.length]!;
