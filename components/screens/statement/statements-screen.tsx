@@ -5,8 +5,10 @@ import { DataTable, dataTableFeatures } from '@/components/ui/data-table';
 import { Screen } from '@/components/ui/screen';
 import { EmptyView, ErrorView, LoadingView } from '@/components/ui/status-views';
 import { Heading, Text } from '@/components/ui/text';
+import { TextLink } from '@/components/ui/text-link';
 import { spacing } from '@/constants/theme';
 import { useStatementsQuery } from '@/hooks/queries/statements';
+import { useActiveRole } from '@/hooks/session';
 
 import { StatementCard, type StatementRow } from './statement-card';
 import { statementColumns } from './statement-columns';
@@ -31,6 +33,15 @@ export function StatementsScreen() {
           What each venue owes for its sales, what it has paid, and what is left. A statement is
           made from a consignment’s page, once the show is closed or while it runs.
         </Text>
+        {useActiveRole() === 'owner' ? (
+          <View style={styles.bank}>
+            <TextLink
+              href="/bank-statement"
+              label="Record payments from a bank statement"
+              testID="statements-bank"
+            />
+          </View>
+        ) : null}
       </View>
       {query.isPending ? (
         <LoadingView message="Fetching the statements…" />
@@ -57,4 +68,5 @@ export function StatementsScreen() {
 
 const styles = StyleSheet.create({
   title: { gap: spacing.xxs },
+  bank: { alignSelf: 'flex-start', paddingTop: spacing.xs },
 });
