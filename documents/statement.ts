@@ -182,7 +182,7 @@ export async function renderStatement(data: StatementDocumentData): Promise<Buff
     place(doc, text(`Pay online: ${data.payUrl}`, type.body), 12);
   }
 
-  sectionHeading(doc, 'Terms');
+  sectionHeading(doc, 'Terms', 140);
   place(doc, text(data.termsInWords.join('\n'), type.body), 12);
   place(
     doc,
