@@ -20,6 +20,8 @@ export const studioNav: readonly NavItem[] = [
   { key: 'works', label: 'Works', href: '/works' },
   { key: 'consignments', label: 'Consignments', href: '/consignments' },
   { key: 'venues', label: 'Venues', href: '/venues' },
+  { key: 'statements', label: 'Statements', href: '/statements', inBar: false },
+  { key: 'year', label: 'The year', href: '/year', roles: ['owner'], inBar: false },
   { key: 'mail', label: 'Sent mail', href: '/mail', roles: ['owner'], inBar: false },
   { key: 'settings', label: 'Settings', href: '/settings', inBar: false },
 ];
@@ -42,5 +44,8 @@ export function navFor(items: readonly NavItem[], role: Role): NavItem[] {
   return items.filter((item) => !item.roles || item.roles.includes(role));
 }
 
-/** A venue's sections: the counter list, which holds the consignments too. */
-export const venueNav: readonly NavItem[] = [{ key: 'counter', label: 'Counter', href: '/venue' }];
+/** A venue's sections: the counter list, which holds the consignments too, and statements. */
+export const venueNav: readonly NavItem[] = [
+  { key: 'counter', label: 'Counter', href: '/venue' },
+  { key: 'venue-statements', label: 'Statements', href: '/venue/statements' },
+];

@@ -1,6 +1,7 @@
 import { type ConditionGrade } from '@/shared/schemas/condition';
 import { type ConsignmentState, type LineState } from '@/shared/schemas/consignment';
 import { type OutboxState } from '@/shared/schemas/outbox';
+import { type StatementState } from '@/shared/schemas/statement';
 import { type WorkStatus } from '@/shared/schemas/work';
 
 import { type StateTone } from './theme';
@@ -77,4 +78,12 @@ export const stepLooks: Record<StepStatus, StateLook> = {
   current: { word: 'Next', shape: 'triangle-right', tone: 'active' },
   todo: { word: 'To do', shape: 'open-square', tone: 'quiet' },
   later: { word: 'Later', shape: 'ring', tone: 'quiet' },
+};
+
+/** A statement: being drawn up, sent to the venue, paid in full, or called off. */
+export const statementStateLooks: Record<StatementState, StateLook> = {
+  draft: { word: 'Draft', shape: 'ring', tone: 'quiet' },
+  issued: { word: 'Issued, awaiting payment', shape: 'triangle-right', tone: 'active' },
+  settled: { word: 'Settled', shape: 'square', tone: 'done' },
+  void: { word: 'Void', shape: 'cross', tone: 'quiet' },
 };

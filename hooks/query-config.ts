@@ -16,6 +16,8 @@ export const staleTimes = {
   studio: 5 * minute,
   outbox: 15 * second,
   consignments: 15 * second,
+  statements: 15 * second,
+  year: minute,
   invitations: 0,
 } as const;
 

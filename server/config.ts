@@ -29,7 +29,22 @@ export function readConfig(env: NodeJS.ProcessEnv = process.env) {
     mailFrom: nonEmpty(env.SAGGAR_MAIL_FROM) ?? defaultMailFrom,
     /** Where the local stand-in keeps what it receives, one .eml file a message. */
     mailDir: path.join(dataDir, 'mail'),
+    /** The payment provider's keys; unset, `npm start` runs a local stand-in and uses it. */
+    stripe: stripeKeys(env),
   };
+}
+
+/** Both of the provider's keys, or neither: one alone is a mistake better caught at start. */
+function stripeKeys(env: NodeJS.ProcessEnv) {
+  const secretKey = nonEmpty(env.STRIPE_SECRET_KEY);
+  const webhookSecret = nonEmpty(env.STRIPE_WEBHOOK_SECRET);
+  if (secretKey && webhookSecret) return { secretKey, webhookSecret };
+  if (secretKey || webhookSecret) {
+    throw new Error(
+      'Set both STRIPE_SECRET_KEY and STRIPE_WEBHOOK_SECRET, or neither to use the local stand-in.',
+    );
+  }
+  return null;
 }
 
 /**

@@ -8,8 +8,10 @@ import { documentAttachmentKinds } from './documents/document-attachments';
 import { type AttachmentRenderer, attachmentRenderer } from './mail/attachments';
 import { type MailComposers } from './mail/composers';
 import { defaultMailFrom } from './mail/transport';
+import { type PaymentProvider } from './payments/payment-provider';
 import { photoAttachmentKinds } from './photos/photo-attachments';
 import { composeSaleNotice } from './sales/sale-notice';
+import { statementAttachmentKinds } from './statements/statement-attachments';
 
 /** Everything the app needs from outside, so tests can build it over an in-memory database. */
 export type AppContext = {
@@ -43,6 +45,11 @@ export type AppContext = {
   renderAttachment: AttachmentRenderer;
   /** Kinds of message written again from their data just before they go (the sale e-mail). */
   composeMail: MailComposers;
+  /**
+   * The payment provider's SDK and webhook secret: the real service, or the local stand-in
+   * `server/index.ts` starts; null where nobody set one up (online payment is then refused).
+   */
+  payments: PaymentProvider | null;
 };
 
 export type ContextOptions = Omit<
@@ -56,13 +63,20 @@ export type ContextOptions = Omit<
   | 'renderAttachment'
   | 'composeMail'
   | 'appUrl'
+  | 'payments'
 > &
   Pick<AuthOptions, 'secret'> &
   Partial<Pick<AuthOptions, 'publicUrl'>> &
   Partial<
     Pick<
       AppContext,
-      'signInLimit' | 'trustProxy' | 'mailFrom' | 'renderAttachment' | 'composeMail' | 'appUrl'
+      | 'signInLimit'
+      | 'trustProxy'
+      | 'mailFrom'
+      | 'renderAttachment'
+      | 'composeMail'
+      | 'appUrl'
+      | 'payments'
     >
   >;
 
@@ -77,9 +91,11 @@ export function createContext(options: ContextOptions): AppContext {
     signInLimit: { perAccount: 10, perAddress: 50, windowMs: 15 * 60 * 1000 },
     trustProxy: false,
     mailFrom: defaultMailFrom,
+    payments: null,
     renderAttachment: attachmentRenderer({
       ...documentAttachmentKinds({ filesDir: options.filesDir, appUrl }),
       ...photoAttachmentKinds({ filesDir: options.filesDir }),
+      ...statementAttachmentKinds({ appUrl }),
     }),
     composeMail: { sale: composeSaleNotice({ appUrl }) },
     ...rest,

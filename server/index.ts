@@ -1,3 +1,5 @@
+import { type Logger } from 'pino';
+
 import { createApp } from './app';
 import { type Config, readConfig } from './config';
 import { createContext } from './context';
@@ -5,12 +7,14 @@ import { openDatabase } from './db/database';
 import { migrateToLatest } from './db/migrate';
 import { demoSignIns } from './demo/demo-studio';
 import { seedDemoIfEmpty } from './demo/seed';
+import { type PaymentsStandIn, startPaymentsStandIn } from './dev-services/payments-stand-in';
 import { type DevSmtpServer, startDevSmtpServer } from './dev-services/smtp-server';
 import { devWebProxy } from './http/dev-web-proxy';
 import { webApp } from './http/web-app';
 import { createLogger } from './logger';
 import { createMailWorker } from './mail/mail-worker';
 import { createMailTransport } from './mail/transport';
+import { createPaymentProvider, type PaymentProvider } from './payments/payment-provider';
 
 /** SMTP_URL if set; otherwise the local stand-in, started here, keeping mail under data/mail/. */
 async function mailServer(config: Config): Promise<{ url: string; local: DevSmtpServer | null }> {
@@ -19,12 +23,46 @@ async function mailServer(config: Config): Promise<{ url: string; local: DevSmtp
   return { url: local.url, local };
 }
 
+/**
+ * The payment provider from STRIPE_SECRET_KEY and STRIPE_WEBHOOK_SECRET if set; otherwise the
+ * local stand-in, started here on loopback, with the SDK pointed at it and its webhooks sent to
+ * this server.
+ */
+async function paymentProvider(
+  config: Config,
+  logger: Logger,
+): Promise<{ provider: PaymentProvider; local: PaymentsStandIn | null }> {
+  if (config.stripe) return { provider: createPaymentProvider(config.stripe), local: null };
+  // This server as the stand-in reaches it: over loopback when it listens on every address.
+  const host = ['0.0.0.0', '::'].includes(config.host) ? '127.0.0.1' : config.host;
+  const origin = `http://${host.includes(':') ? `[${host}]` : host}:${config.port}`;
+  const local = await startPaymentsStandIn({
+    webhookUrl: `${origin}/api/payments/webhook`,
+    onDelivery: (d) => {
+      if (!d.error) return;
+      logger.warn({ eventId: d.eventId, status: d.status, error: d.error }, 'webhook refused');
+    },
+  });
+  const provider = createPaymentProvider({
+    secretKey: local.secretKey,
+    webhookSecret: local.webhookSecret,
+    endpoint: { host: '127.0.0.1', port: local.port, protocol: 'http' },
+  });
+  return { provider, local };
+}
+
 async function main() {
   const config = readConfig();
   const logger = createLogger(config.logLevel);
   const db = openDatabase(config.dbFile);
   await migrateToLatest(db);
   const seeded = await seedDemoIfEmpty(db, { filesDir: config.filesDir });
+  const payments = await paymentProvider(config, logger.child({ part: 'payments stand-in' }));
+  if (payments.local && config.publicUrl) {
+    logger.warn(
+      'STRIPE_SECRET_KEY is not set: online payment goes to the local stand-in, and nobody pays.',
+    );
+  }
 
   const context = createContext({
     db,
@@ -37,6 +75,7 @@ async function main() {
     filesDir: config.filesDir,
     trustProxy: config.trustProxy,
     mailFrom: config.mailFrom,
+    payments: payments.provider,
   });
   const app = createApp(context);
 
@@ -65,6 +104,9 @@ async function main() {
       smtp.local
         ? `Mail: local stand-in at ${smtp.local.url}; what it receives is kept in ${config.mailDir}`
         : `Mail: sent through ${redactedUrl(smtp.url)}`,
+      payments.local
+        ? `Payments: local stand-in at ${payments.local.url} (test payments, no card is charged)`
+        : 'Payments: through Stripe',
     ];
     console.log(lines.join('\n'));
   });
@@ -79,6 +121,7 @@ async function main() {
     void Promise.all([closed, mailWorker.stop()]).then(async () => {
       transport.close();
       await smtp.local?.stop();
+      await payments.local?.stop();
       await db.destroy();
       process.exit(0);
     });

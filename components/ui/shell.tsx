@@ -23,17 +23,28 @@ type ShellProps = {
   children: ReactNode;
 };
 
-function isCurrent(pathname: string, href: NavItem['href']): boolean {
-  const target = typeof href === 'string' ? href : href.pathname;
+const targetOf = (href: NavItem['href']) => (typeof href === 'string' ? href : href.pathname);
+
+function matches(pathname: string, href: NavItem['href']): boolean {
+  const target = targetOf(href);
   return target === '/'
     ? pathname === '/'
     : pathname === target || pathname.startsWith(`${target}/`);
 }
 
+/** The section a page is in: the one whose address is the longest start of the page's. */
+function isCurrent(pathname: string, href: NavItem['href'], nav: readonly NavItem[]): boolean {
+  if (!matches(pathname, href)) return false;
+  const length = targetOf(href).length;
+  return !nav.some(
+    (other) => targetOf(other.href).length > length && matches(pathname, other.href),
+  );
+}
+
 /** In the bottom bar, More stands for the sections under it. */
 function isCurrentInBar(pathname: string, item: NavItem, nav: readonly NavItem[]): boolean {
-  if (item.key !== moreNavItem.key) return isCurrent(pathname, item.href);
-  return [item, ...underMore(nav)].some((under) => isCurrent(pathname, under.href));
+  if (item.key !== moreNavItem.key) return isCurrent(pathname, item.href, nav);
+  return [item, ...underMore(nav)].some((under) => isCurrent(pathname, under.href, nav));
 }
 
 type NavPressableProps = Omit<PressableProps, 'style' | 'children'> & {
@@ -117,7 +128,7 @@ export function Shell({ nav, me, membership, children }: ShellProps) {
     <NavLink
       key={item.key}
       item={item}
-      current={wide ? isCurrent(pathname, item.href) : isCurrentInBar(pathname, item, nav)}
+      current={wide ? isCurrent(pathname, item.href, nav) : isCurrentInBar(pathname, item, nav)}
       layout={wide ? 'side' : 'tab'}
     />
   ));

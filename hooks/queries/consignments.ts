@@ -35,9 +35,13 @@ export const consignmentKeys = {
   detail: (id: number) => [...consignmentKeys.details(), id] as const,
 };
 
-/** A consignment's change moves its works, the overview, the venue's page and the venue side. */
+/**
+ * A consignment's change moves its works, the overview, the venue's page, the venue side and its
+ * statements (a draft follows the sales; settling moves both).
+ */
 export async function invalidateConsignments(queryClient: QueryClient, id?: number) {
   await Promise.all([
+    queryClient.invalidateQueries({ queryKey: ['statements'] }),
     queryClient.invalidateQueries({ queryKey: consignmentKeys.lists() }),
     queryClient.invalidateQueries({ queryKey: overviewKeys.all }),
     queryClient.invalidateQueries({ queryKey: workKeys.all }),
@@ -133,9 +137,12 @@ export function useLineRemoveMutation(id: number) {
   );
 }
 
-/** Agree, dispatch or cancel: one step of the consignment's life. */
+/**
+ * Agree, dispatch, cancel or close: one step of the consignment's life. Closing is refused (409)
+ * while pieces are out, the error's field messages keyed `lines.<lineId>`.
+ */
 export function useConsignmentStepMutation(id: number) {
-  return useConsignmentChange(id, (step: 'agree' | 'dispatch' | 'cancel') =>
+  return useConsignmentChange(id, (step: 'agree' | 'dispatch' | 'cancel' | 'close') =>
     apiRequest(`/api/consignments/${id}/${step}`, {
       method: 'POST',
       body: {},

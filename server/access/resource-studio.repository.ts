@@ -42,4 +42,13 @@ export const studioOf = {
       .executeTakeFirst();
     return row?.studio_id;
   },
+
+  async statement(db: Db, statementId: number) {
+    const row = await db
+      .selectFrom('statements')
+      .select('studio_id')
+      .where('id', '=', statementId)
+      .executeTakeFirst();
+    return row?.studio_id;
+  },
 };

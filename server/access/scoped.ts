@@ -92,6 +92,15 @@ export const scoped = {
     return scope.venueId === null ? q : q.where(sql<boolean>`1 = 0`);
   },
 
+  /** Statements; a venue's staff see their venue's once issued, never a draft. */
+  statements(db: Db, scope: Scope) {
+    const q = db.selectFrom('statements').where('statements.studio_id', '=', scope.studioId);
+    if (scope.venueId === null) return q;
+    return q
+      .where('statements.venue_id', '=', scope.venueId)
+      .where('statements.state', '!=', 'draft');
+  },
+
   files(db: Db, scope: Scope) {
     return db.selectFrom('files').where('files.studio_id', '=', scope.studioId);
   },

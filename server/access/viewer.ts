@@ -18,7 +18,8 @@ export type Viewer = {
 export type Scope = {
   studioId: number;
   venueId: number | null;
-  userId: string;
+  /** Who acts; null when nobody signed in does, as for the payment provider's webhook. */
+  userId: string | null;
   role: Membership['role'];
 };
 

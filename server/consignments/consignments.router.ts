@@ -28,6 +28,7 @@ import {
   acknowledgeConsignment,
   agreeConsignment,
   cancelConsignment,
+  closeConsignment,
   dispatchConsignment,
 } from './lifecycle.service';
 import { addLine, removeLine, updateLinePrice } from './lines.service';
@@ -97,6 +98,9 @@ export function consignmentsRouter({ db, appUrl }: AppContext) {
     })
     .post('/:id/dispatch', studio, byId, async (_req, res) => {
       res.json(await dispatchConsignment(db, scopeOf(res), byId.input(res).params.id, { appUrl }));
+    })
+    .post('/:id/close', studio, byId, async (_req, res) => {
+      res.json(await closeConsignment(db, scopeOf(res), byId.input(res).params.id));
     })
     .post('/:id/cancel', studio, byId, async (_req, res) => {
       res.json(await cancelConsignment(db, scopeOf(res), byId.input(res).params.id));

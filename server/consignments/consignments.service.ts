@@ -7,6 +7,7 @@ import {
   sumMoney,
   trySplitSale,
 } from '@/shared/money';
+import { type ConditionCheck } from '@/shared/schemas/condition';
 import {
   type Consignment,
   type ConsignmentCreateParsed,
@@ -111,6 +112,34 @@ export async function listConsignments(
 }
 export type { ConsignmentListQuery };
 
+/**
+ * What the return check found that the dispatch check did not. Damage already there on arrival
+ * happened on the way out, insured by whoever insures in transit; otherwise at the venue (or on
+ * the way back), insured by whoever insures on the premises (docs/condition.md).
+ */
+function newDamageOf(
+  terms: Terms,
+  dispatch: ConditionCheck | null,
+  arrival: ConditionCheck | null,
+  back: ConditionCheck | null,
+  insuranceValue: Money,
+): ConsignmentLine['newDamage'] {
+  if (!dispatch || !back) return null;
+  const differences = conditionDifferences(dispatch.findings, back.findings).filter(
+    (d) => d.change !== 'missing',
+  );
+  if (differences.length === 0) return null;
+  const seenOnArrival =
+    arrival !== null &&
+    conditionDifferences(dispatch.findings, arrival.findings).some((d) => d.change !== 'missing');
+  return {
+    differences,
+    where: seenOnArrival ? 'in-transit' : 'at-venue',
+    insuredBy: seenOnArrival ? terms.insuredInTransitBy : terms.insuredBy,
+    insuranceValue,
+  };
+}
+
 function toLine(
   terms: Terms,
   row: Awaited<ReturnType<typeof listLineRows>>[number],
@@ -121,6 +150,8 @@ function toLine(
   const lineChecks = checks.get(row.id) ?? {};
   const dispatchCheck = lineChecks.dispatch ?? null;
   const arrivalCheck = lineChecks.arrival ?? null;
+  const returnCheck = lineChecks.return ?? null;
+  const insuranceValue = { amount: row.insurance_value, currency: row.currency };
   return {
     id: row.id,
     workId: row.work_id,
@@ -129,7 +160,7 @@ function toLine(
     thumbnailUrl:
       row.cover_photo_id === null ? null : `/api/photos/${row.cover_photo_id}/thumbnail`,
     listPrice,
-    insuranceValue: { amount: row.insurance_value, currency: row.currency },
+    insuranceValue,
     state: row.state,
     split: row.currency === terms.currency ? trySplitSale(terms, listPrice, listPrice) : null,
     dispatchCheck,
@@ -138,6 +169,8 @@ function toLine(
       dispatchCheck && arrivalCheck
         ? conditionDifferences(dispatchCheck.findings, arrivalCheck.findings)
         : [],
+    returnCheck,
+    newDamage: newDamageOf(terms, dispatchCheck, arrivalCheck, returnCheck, insuranceValue),
     weightG: row.weight_g,
     sale:
       row.state === 'sold' && row.sold_on !== null && row.sale_price !== null

@@ -7,6 +7,7 @@ import { latestChecksByLine, recordCheck } from '../condition/condition.service'
 import { type Db } from '../db/database';
 import { HttpError } from '../http/http-error';
 import { inviteVenueStaff } from '../invitations/invitations.service';
+import { settleConsignmentIfDone } from '../statements/settlement';
 import { getStudio } from '../studio/studio.service';
 import { listLineRows, updateConsignmentIn, withdrawOpenLines } from './consignments.repository';
 import { consignmentRow, getConsignment, termsOf, wrongState } from './consignments.service';
@@ -215,6 +216,50 @@ export async function acknowledgeConsignment(
       before: { state: 'dispatched' },
       after: { state: 'on-show', acknowledgedAt, pieces: input.reports.length },
     });
+  });
+  return getConsignment(db, scope, id);
+}
+
+/**
+ * Closes a show once every piece is accounted for: sold, returned, damaged, lost or withdrawn. The
+ * refusal lists the pieces still out. A show that sold nothing is settled at once.
+ */
+export async function closeConsignment(db: Db, scope: Scope, id: number): Promise<Consignment> {
+  await db.transaction().execute(async (trx) => {
+    const row = await consignmentRow(trx, scope, id);
+    if (row.state !== 'dispatched' && row.state !== 'on-show') {
+      throw wrongState(row.reference, row.state, 'only a show that has been sent is closed.');
+    }
+    const out = (await listLineRows(trx, scope, id)).filter((l) => l.state === 'consigned');
+    if (out.length > 0) {
+      throw new HttpError(
+        'conflict',
+        `Account for every piece before closing ${row.reference}. Still out: ${out
+          .map((l) => `${l.stock_number} ${l.title}`)
+          .join('; ')}.`,
+        out.map((l) => ({
+          path: ['lines', l.id],
+          message: `${l.stock_number} is still out: mark it sold, returned, damaged or lost.`,
+        })),
+      );
+    }
+    const closedAt = new Date().toISOString();
+    if (
+      !(await updateConsignmentIn(trx, scope, id, ['dispatched', 'on-show'], {
+        state: 'closed',
+        closed_at: closedAt,
+      }))
+    ) {
+      throw wrongState(row.reference, 'closed', 'it is closed once.');
+    }
+    await writeAudit(trx, scope, {
+      action: 'consignment.closed',
+      entity: 'consignment',
+      entityId: id,
+      before: { state: row.state },
+      after: { state: 'closed', closedAt },
+    });
+    await settleConsignmentIfDone(trx, scope, id);
   });
   return getConsignment(db, scope, id);
 }

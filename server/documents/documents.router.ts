@@ -1,18 +1,21 @@
 import { create as contentDisposition } from 'content-disposition';
 import express from 'express';
 
-import { consignmentParamsSchema } from '@/shared/schemas/consignment';
+import { consignmentParamsSchema, lineOnlyParamsSchema } from '@/shared/schemas/consignment';
 
-import { scopeOf } from '../access/authenticate';
+import { requireRole, scopeOf } from '../access/authenticate';
 import { requireAnyRole, requireScopeOf } from '../access/resource-scope';
 import { studioOf } from '../access/resource-studio.repository';
 import { type AppContext } from '../context';
 import { validate } from '../http/validate';
 import { photoStore } from '../photos/photo-store';
+import { renderClaimDocument } from './claim-document';
 import { type DocumentKind, renderConsignmentDocument } from './documents.service';
 
 const byId = validate({ params: consignmentParamsSchema });
 const roles = ['owner', 'assistant', 'gallery'] as const;
+const studio = requireRole('owner', 'assistant');
+const byLine = validate({ params: lineOnlyParamsSchema });
 
 /** The path under a consignment where each of its PDFs is served. */
 const documentPaths: Record<DocumentKind, string> = {
@@ -48,4 +51,19 @@ export function documentsRouter({ db, filesDir, appUrl }: AppContext) {
     });
   }
   return router;
+}
+
+/** `/api/consignment-lines/:lineId/claim.pdf`: the damage claim summary of a returned piece. */
+export function lineDocumentsRouter({ db, filesDir }: AppContext) {
+  const store = photoStore(filesDir);
+  return express
+    .Router({ mergeParams: true })
+    .get('/claim.pdf', studio, byLine, async (_req, res) => {
+      const { lineId } = byLine.input(res).params;
+      const document = await renderClaimDocument(db, store, scopeOf(res), lineId);
+      res.type('application/pdf');
+      res.set('Content-Disposition', contentDisposition(document.fileName, { type: 'inline' }));
+      res.set('Cache-Control', 'private, no-store');
+      res.send(document.bytes);
+    });
 }

@@ -39,7 +39,7 @@ export const documentFileName = (reference: string, kind: DocumentKind) =>
   `${reference} ${fileWords[kind]}.pdf`;
 
 /** A picture as a small JPEG for a page: pdfkit reads JPEG and PNG, the store keeps WebP. */
-const jpegOf = (file: string, size: number) =>
+export const jpegOf = (file: string, size: number) =>
   sharp(file).resize(size, size, { fit: 'cover' }).jpeg({ quality: 82 }).toBuffer();
 
 async function headingRow(db: Db, scope: Scope, consignmentId: number) {

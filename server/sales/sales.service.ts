@@ -256,7 +256,6 @@ export async function undoSale(db: Db, scope: Scope, lineId: number): Promise<Li
     if (line.state !== 'sold') {
       throw new HttpError('conflict', `${pieceName(line)} is not sold: there is no sale to undo.`);
     }
-    checkShowRunning(line);
     const statement = await findIssuedStatementOf(trx, scope, lineId);
     if (statement) {
       throw new HttpError(
@@ -266,6 +265,7 @@ export async function undoSale(db: Db, scope: Scope, lineId: number): Promise<Li
         }: it is locked. A correction goes on a new statement.`,
       );
     }
+    checkShowRunning(line);
     if (scope.venueId !== null && line.sale_entered_by === 'studio') {
       throw new HttpError(
         'forbidden',

@@ -202,6 +202,21 @@ export const consignmentLineSchema = z.object({
   arrivalCheck: conditionCheckSchema.nullable(),
   /** What the arrival check found that the dispatch check did not (or no longer). */
   differences: z.array(conditionDifferenceSchema),
+  /** The check when the piece came back to the studio. */
+  returnCheck: conditionCheckSchema.nullable(),
+  /**
+   * New damage: what the return check found that the dispatch check did not, with who insured the
+   * piece where it most likely happened (the copied terms) and its insurance value.
+   */
+  newDamage: z
+    .object({
+      differences: z.array(conditionDifferenceSchema),
+      /** Seen on arrival already: in transit to the venue; otherwise at the venue or on the way back. */
+      where: z.enum(['in-transit', 'at-venue']),
+      insuredBy: z.enum(['maker', 'venue']),
+      insuranceValue: moneySchema,
+    })
+    .nullable(),
   weightG: z.number().int().nullable(),
   /** The sale, once sold: when, for how much, and its split under the consignment's terms. */
   sale: z

@@ -110,3 +110,63 @@ export type LabelsData = {
   locale: string;
   labels: LabelData[];
 };
+
+export type StatementDocumentLine = {
+  consignmentReference: string;
+  stockNumber: string;
+  title: string;
+  soldOn: string;
+  salePrice: Money;
+  commission: Money;
+  vatOnCommission: Money;
+  makerShare: Money;
+};
+
+/** A statement of account: the sales, their split, the payments, and the balance due. */
+export type StatementDocumentData = DocumentHeading & {
+  /** "Draft", "Issued", "Settled". */
+  stateWords: string;
+  termsInWords: string[];
+  makerVatRegistered: boolean;
+  lines: StatementDocumentLine[];
+  totals: {
+    sales: Money;
+    commission: Money;
+    vatOnCommission: Money;
+    makerShare: Money;
+    makerOutputVat: Money;
+    makerReclaimableVat: Money;
+  };
+  payments: {
+    receivedOn: string | null;
+    method: string;
+    reference: string | null;
+    amount: Money;
+  }[];
+  adjustments: { reason: string; note: string | null; amount: Money }[];
+  paid: Money;
+  balance: Money;
+  dueDate: string | null;
+  /** Where the venue pays online, printed under the balance; null when settled. */
+  payUrl: string | null;
+};
+
+/** One stage's check as a claim summary lists it: who, when, and each finding in words. */
+export type ClaimCheck = {
+  stageWords: string;
+  examinerName: string;
+  examinedOn: string;
+  findings: string[];
+};
+
+/** A damage claim's summary: the piece, its value, who insured it where, and what changed. */
+export type ClaimSummaryData = DocumentHeading & {
+  piece: { stockNumber: string; title: string; listPrice: Money };
+  insuranceValue: Money;
+  /** "the venue, on its premises" or "the maker, in transit". */
+  insuredWords: string;
+  whereWords: string;
+  checks: ClaimCheck[];
+  newDamage: string[];
+  photos: Uint8Array[];
+};

@@ -163,6 +163,8 @@ const line: ConsignmentLine = {
   dispatchCheck: null,
   arrivalCheck: null,
   differences: [],
+  returnCheck: null,
+  newDamage: null,
   weightG: 2400,
   sale: null,
   resolution: null,

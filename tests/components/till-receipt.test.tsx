@@ -22,6 +22,8 @@ const piece = (id: number, stockNumber: string, title: string, price: number): C
   dispatchCheck: null,
   arrivalCheck: null,
   differences: [],
+  returnCheck: null,
+  newDamage: null,
   weightG: null,
   sale: null,
   resolution: null,

@@ -4,6 +4,7 @@ import os from 'node:os';
 import path from 'node:path';
 
 import { sql } from 'kysely';
+import Stripe from 'stripe';
 import request from 'supertest';
 
 import { isoDateInTimeZone } from '@/shared/money';
@@ -11,11 +12,13 @@ import { isoDateInTimeZone } from '@/shared/money';
 import {
   as,
   consignmentFixture,
+  dispatchedWith,
   draftWith,
   galleryTerms,
   soundCheck,
 } from './helpers/consignment-fixture';
 import { mountedRoutes } from './helpers/mounted-routes';
+import { startTestPayments } from './helpers/payments';
 import { picture } from './helpers/pictures';
 import { protectedRoutes, publicRoutes } from './helpers/routes';
 import { insertWork } from './helpers/studio-fixture';
@@ -56,7 +59,25 @@ type Call = {
   body?: object;
   /** A picture sent as multipart form data under this field. */
   attach?: string;
+  /** A payment provider's event, sent as raw JSON signed with the stand-in's secret. */
+  webhook?: string;
 };
+
+const ignoredEvent = JSON.stringify({
+  id: 'evt_test_access_matrix',
+  object: 'event',
+  api_version: null,
+  created: 1_790_000_000,
+  data: { object: { id: 'pi_test_other', object: 'payment_intent' } },
+  livemode: false,
+  pending_webhooks: 1,
+  request: { id: null, idempotency_key: null },
+  type: 'payment_intent.succeeded',
+});
+// The SDK's own helper signs as the provider would.
+const sdk = new Stripe('sk_test_reference_only');
+
+const gbp = (amount: number) => ({ amount, currency: 'GBP' });
 
 async function buildFixture(dir: string) {
   const f = await consignmentFixture({
@@ -121,6 +142,61 @@ async function buildFixture(dir: string) {
     archived_at: new Date().toISOString(),
   });
 
+  // A show over: A-8 sold, A-9 back with a crack its dispatch check did not have (new damage),
+  // closed, its statement issued. Another still open with A-10 sold: every piece accounted for,
+  // so it may be closed, and its statement a draft.
+  const gallery = as(f, 'gallery');
+  const must = (res: { status: number; body: unknown }, what: string) => {
+    if (res.status >= 300) throw new Error(`${what}: ${JSON.stringify(res.body)}`);
+    return res.body as { id: number; lines: { id: number }[] };
+  };
+  const over = await dispatchedWith(f, [
+    await insertWork(f.db, f.studioA, 'A-8'),
+    await insertWork(f.db, f.studioA, 'A-9'),
+  ]);
+  const [overSold, overBack] = over.lines.map((l) => l.id) as [number, number];
+  must(
+    await gallery.post(`/api/consignment-lines/${overSold}/sale`, {
+      soldOn: today,
+      salePrice: gbp(10_000),
+    }),
+    'sale on the show over',
+  );
+  must(
+    await gallery.post(`/api/consignment-lines/${overBack}/resolve`, {
+      state: 'returned',
+      on: today,
+    }),
+    'return',
+  );
+  must(
+    await owner.post(`/api/consignment-lines/${overBack}/condition-reports`, {
+      stage: 'return',
+      ...soundCheck,
+      examinedOn: today,
+      findings: [{ kind: 'crack', grade: 'serious', location: 'foot ring' }],
+    }),
+    'return check',
+  );
+  must(await owner.post(`/api/consignments/${over.id}/close`), 'close');
+  const issued = must(
+    await owner.post('/api/statements', { consignmentId: over.id }),
+    'statement of the show over',
+  );
+  must(await owner.post(`/api/statements/${issued.id}/issue`), 'issue');
+  const ending = await dispatchedWith(f, [await insertWork(f.db, f.studioA, 'A-10')]);
+  must(
+    await gallery.post(`/api/consignment-lines/${ending.lines[0]!.id}/sale`, {
+      soldOn: today,
+      salePrice: gbp(9_000),
+    }),
+    'sale on the show ending',
+  );
+  const draftStatement = must(
+    await owner.post('/api/statements', { consignmentId: ending.id }),
+    'draft statement',
+  );
+
   const dispatchMail = await f.db
     .selectFrom('outbox')
     .select(['id', 'text_body'])
@@ -155,8 +231,15 @@ async function buildFixture(dir: string) {
     venueA: f.venueA,
     works: { onShow: w1, free, archived },
     photos: { cover: cover.id as number, free: freePhotos.map((p) => p.id) },
-    consignments: { sent: sent.id, draft: draft.id, agreed: agreed.id },
-    lines: { out: lineOut, spare: lineSpare, sold: lineSold, draft: draft.lines[0]!.id },
+    consignments: { sent: sent.id, draft: draft.id, agreed: agreed.id, ending: ending.id },
+    lines: {
+      out: lineOut,
+      spare: lineSpare,
+      sold: lineSold,
+      draft: draft.lines[0]!.id,
+      damaged: overBack,
+    },
+    statements: { issued: issued.id, draft: draftStatement.id },
     conditionPhoto: chip.fileId as number,
     dispatchMail: dispatchMail.id,
     invitation,
@@ -164,7 +247,6 @@ async function buildFixture(dir: string) {
 }
 type Ids = Awaited<ReturnType<typeof buildFixture>>;
 
-const gbp = (amount: number) => ({ amount, currency: 'GBP' });
 const get = (path: string): Call => ({ method: 'get', path });
 const post = (path: string, body: object = {}): Call => ({ method: 'post', path, body });
 
@@ -534,6 +616,117 @@ const matrix: Row[] = [
       }),
     expect: studioAndItsVenue(201),
   },
+  {
+    route: 'POST /api/consignments/:id/close',
+    call: (x) => post(`/api/consignments/${x.consignments.ending}/close`),
+    expect: studioOnly(200),
+  },
+  {
+    route: 'GET /api/consignment-lines/:lineId/claim.pdf',
+    call: (x) => get(`/api/consignment-lines/${x.lines.damaged}/claim.pdf`),
+    expect: studioOnly(200),
+  },
+  // Each person's own list: the venue's staff see its issued statements, others theirs.
+  { route: 'GET /api/statements', call: () => get('/api/statements'), expect: signedInOnly(200) },
+  {
+    route: 'POST /api/statements',
+    call: (x) =>
+      post('/api/statements', { venueId: x.venueA, periodStart: x.today, periodEnd: x.today }),
+    expect: ownerOnly(201),
+  },
+  {
+    route: 'GET /api/statements/:id',
+    call: (x) => get(`/api/statements/${x.statements.issued}`),
+    expect: studioAndItsVenue(200),
+  },
+  {
+    route: 'GET /api/statements/:id.pdf',
+    call: (x) => get(`/api/statements/${x.statements.issued}.pdf`),
+    expect: studioAndItsVenue(200),
+  },
+  {
+    route: 'POST /api/statements/:id/issue',
+    call: (x) => post(`/api/statements/${x.statements.draft}/issue`),
+    expect: ownerOnly(200),
+  },
+  {
+    route: 'POST /api/statements/:id/payments',
+    call: (x) =>
+      post(`/api/statements/${x.statements.issued}/payments`, {
+        amount: gbp(5_000),
+        receivedOn: x.today,
+        method: 'bank-transfer',
+        reference: 'REMIT 1',
+      }),
+    expect: ownerOnly(201),
+  },
+  {
+    route: 'POST /api/statements/:id/adjustments',
+    call: (x) =>
+      post(`/api/statements/${x.statements.issued}/adjustments`, {
+        kind: 'fee-deducted',
+        amount: gbp(500),
+        note: 'Card fee',
+      }),
+    expect: ownerOnly(201),
+  },
+  {
+    // The venue that owes it and the owner; another venue's staff of A find nothing of it.
+    route: 'POST /api/statements/:id/checkout',
+    call: (x) => post(`/api/statements/${x.statements.issued}/checkout`),
+    expect: [401, 200, 403, 200, 404, 404],
+  },
+  {
+    // No session but the provider's signature: an event it has no use for is acknowledged.
+    route: 'POST /api/payments/webhook',
+    call: () => ({ method: 'post', path: '/api/payments/webhook', webhook: ignoredEvent }),
+    expect: everyone(200),
+  },
+  { route: 'GET /api/year', call: () => get('/api/year?year=2026'), expect: ownerOnly(200) },
+  {
+    route: 'GET /api/year/sales.csv',
+    call: () => get('/api/year/sales.csv?year=2026'),
+    expect: ownerOnly(200),
+  },
+  {
+    route: 'GET /api/year/payments.csv',
+    call: () => get('/api/year/payments.csv?year=2026'),
+    expect: ownerOnly(200),
+  },
+  {
+    route: 'GET /api/year/statements.csv',
+    call: () => get('/api/year/statements.csv?year=2026'),
+    expect: ownerOnly(200),
+  },
+  {
+    route: 'GET /api/calendar-feed',
+    call: () => get('/api/calendar-feed'),
+    expect: ownerOnly(200),
+  },
+  {
+    route: 'POST /api/calendar-feed',
+    call: () => post('/api/calendar-feed'),
+    expect: ownerOnly(201),
+  },
+  {
+    route: 'DELETE /api/calendar-feed',
+    call: () => ({ method: 'delete', path: '/api/calendar-feed' }),
+    expect: ownerOnly(200),
+  },
+  {
+    // Public (a calendar program signs in to nothing): an address nobody made is not found.
+    route: 'GET /api/calendar/:token.ics',
+    call: () => get(`/api/calendar/${'a'.repeat(43)}.ics`),
+    expect: everyone(404),
+  },
+  {
+    route: 'POST /api/bank-imports/matches',
+    call: () =>
+      post('/api/bank-imports/matches', {
+        csv: 'Date,Amount,Reference\r\n2026-12-01,10.00,REMIT\r\n',
+      }),
+    expect: ownerOnly(200),
+  },
   { route: 'GET /api/outbox', call: () => get('/api/outbox'), expect: ownerOnly(200) },
   {
     route: 'GET /api/outbox/:id',
@@ -562,6 +755,7 @@ const refusals: Record<number, object> = {
 let root: string;
 let base: string;
 let ids: Ids;
+let payments: Awaited<ReturnType<typeof startTestPayments>>;
 
 /** A copy of the fixture with an app over it. */
 async function freshApp() {
@@ -570,6 +764,7 @@ async function freshApp() {
   const ctx = await createTestApp({
     dbFile: path.join(dir, 'saggar.db'),
     filesDir: path.join(dir, 'files'),
+    payments: payments.provider,
   });
   return {
     app: ctx.app,
@@ -587,19 +782,31 @@ async function send(app: Parameters<typeof request>[0], call: Call, who: Person)
     req = req.set('Host', 'saggar.example').set('Origin', 'http://saggar.example');
   const cookie = ids.cookies[who];
   if (cookie) req = req.set('Cookie', cookie);
+  if (call.webhook) {
+    const signature = sdk.webhooks.generateTestHeaderString({
+      payload: call.webhook,
+      secret: payments.standIn.webhookSecret,
+    });
+    return req
+      .set('Content-Type', 'application/json; charset=utf-8')
+      .set('Stripe-Signature', signature)
+      .send(call.webhook);
+  }
   if (call.attach) return req.attach(call.attach, await picture(200, 150, '#5d7a8c'), 'piece.jpg');
   return call.body === undefined ? req : req.send(call.body);
 }
 
 beforeAll(async () => {
+  payments = await startTestPayments();
   root = fs.mkdtempSync(path.join(os.tmpdir(), 'saggar-access-matrix-'));
   base = path.join(root, 'base');
   fs.mkdirSync(base);
   ids = await buildFixture(base);
 }, 60_000);
 
-afterAll(() => {
+afterAll(async () => {
   fs.rmSync(root, { recursive: true, force: true });
+  await payments?.standIn.stop();
 });
 
 describe('the access matrix', () => {

@@ -24,6 +24,7 @@ import { termsInWords } from '@/shared/terms/terms-in-words';
 import { today } from '../condition-check/today';
 import { TermsInWords } from '../consignment-form/terms-in-words';
 import { ChecklistStep } from './checklist-step';
+import { CloseStep, StatementStep } from './closing-steps';
 import { DetailsEditor } from './details-editor';
 import { DispatchCheck } from './dispatch-check';
 import { DocumentLinks } from './document-links';
@@ -254,17 +255,8 @@ function Body({ consignment }: { consignment: Consignment }) {
           {reached(c, 'dispatched') ? <LineTallies consignment={c} /> : null}
         </ChecklistStep>
 
-        <ChecklistStep
-          number={7}
-          title="Close, statement and payment"
-          testID="step-later"
-          status={reached(c, 'settled') ? 'done' : 'later'}
-          summary={
-            reached(c, 'on-show')
-              ? 'At the end of the show every piece is accounted for, the statement issued and paid.'
-              : 'Once the show is over.'
-          }
-        />
+        <CloseStep consignment={c} number={7} />
+        <StatementStep consignment={c} number={8} owner={owner} />
       </View>
 
       {c.state === 'draft' || c.state === 'agreed' ? (

@@ -13,6 +13,7 @@ import { CheckForm } from '../condition-check/check-form';
 import { CheckSummary } from '../condition-check/check-summary';
 import { Differences } from '../condition-check/differences';
 import { today } from '../condition-check/today';
+import { NewDamage, ReturnCheck } from './return-check';
 
 /** A piece's condition as the maker sees it: the check before it leaves, and later ones. */
 export function DispatchCheck({
@@ -30,17 +31,36 @@ export function DispatchCheck({
   const id = `piece-${line.id}-check`;
   return (
     <View style={styles.check}>
-      {line.dispatchCheck ? (
-        <CheckSummary check={line.dispatchCheck} testID={`${id}-dispatch`} />
-      ) : (
-        <Text style={checking ? styles.missing : undefined} testID={`${id}-missing`}>
-          Not checked yet.
-        </Text>
-      )}
-      {line.arrivalCheck ? (
-        <CheckSummary check={line.arrivalCheck} testID={`${id}-arrival`} />
-      ) : null}
+      {/* Dispatch, arrival and return side by side where there is room, so change shows. */}
+      <View style={styles.checks}>
+        {line.dispatchCheck ? (
+          <View style={styles.checkCell}>
+            <CheckSummary check={line.dispatchCheck} testID={`${id}-dispatch`} />
+          </View>
+        ) : (
+          <Text style={checking ? styles.missing : undefined} testID={`${id}-missing`}>
+            Not checked yet.
+          </Text>
+        )}
+        {line.arrivalCheck ? (
+          <View style={styles.checkCell}>
+            <CheckSummary check={line.arrivalCheck} testID={`${id}-arrival`} />
+          </View>
+        ) : null}
+        {line.returnCheck ? (
+          <View style={styles.checkCell}>
+            <CheckSummary check={line.returnCheck} testID={`${id}-return`} />
+          </View>
+        ) : null}
+      </View>
       <Differences differences={line.differences} testID={`${id}-differences`} />
+      <NewDamage line={line} testID={`${id}-damage`} />
+      <ReturnCheck
+        consignmentId={consignment.id}
+        line={line}
+        examinerName={examinerName}
+        testID={`${id}-on-return`}
+      />
       {checking && !open ? (
         <View style={styles.buttons}>
           <Button
@@ -92,6 +112,8 @@ export function DispatchCheck({
 
 const styles = StyleSheet.create({
   check: { gap: spacing.sm },
+  checks: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.lg },
+  checkCell: { flexGrow: 1, flexBasis: 220 },
   missing: { color: palette.ochre },
   buttons: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
 });

@@ -8,6 +8,8 @@ import { spacing } from '@/constants/theme';
 import { useActiveRole } from '@/hooks/session';
 
 const descriptions: Record<string, string> = {
+  statements: 'What each venue owes for its sales, what it paid, and any difference explained.',
+  year: 'Sales by month, venue and series, insured value out, and the VAT threshold.',
   mail: 'Every e-mail Saggar sent for the studio, with its attachments, and any that did not go.',
   settings: 'How stock numbers are made and prices rounded.',
 };

@@ -22,6 +22,8 @@ import {
   studioSettingsUpdateSchema,
 } from '@/shared/schemas/studio';
 
+import { CalendarCard } from './calendar-card';
+
 type SettingsValues = { stockNumberPattern: string; priceStep: string };
 
 function settingsBinding(currency: string) {
@@ -137,6 +139,7 @@ export function SettingsScreen() {
           />
         </Card>
       )}
+      {role === 'owner' ? <CalendarCard /> : null}
       {studio.data ? (
         <Card>
           <Heading level={2}>The studio</Heading>

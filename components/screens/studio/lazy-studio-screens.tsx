@@ -21,6 +21,9 @@ function lazyScreen<Props extends object>(pick: () => Promise<ComponentType<Prop
   };
 }
 
+export const BankImportScreen = lazyScreen(
+  async () => (await loadStudioScreens()).BankImportScreen,
+);
 export const MailScreen = lazyScreen(async () => (await loadStudioScreens()).MailScreen);
 export const MailMessageScreen = lazyScreen(
   async () => (await loadStudioScreens()).MailMessageScreen,
@@ -52,3 +55,8 @@ export const WorkImportScreen = lazyScreen(
   async () => (await loadStudioScreens()).WorkImportScreen,
 );
 export const WorksScreen = lazyScreen(async () => (await loadStudioScreens()).WorksScreen);
+export const StatementScreen = lazyScreen(async () => (await loadStudioScreens()).StatementScreen);
+export const StatementsScreen = lazyScreen(
+  async () => (await loadStudioScreens()).StatementsScreen,
+);
+export const YearScreen = lazyScreen(async () => (await loadStudioScreens()).YearScreen);

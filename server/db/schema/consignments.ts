@@ -22,6 +22,8 @@ export interface ConsignmentsTable {
   acknowledged_at: string | null;
   acknowledged_by: string | null;
   cancelled_at: string | null;
+  closed_at: string | null;
+  settled_at: string | null;
   notes: string | null;
   created_at: Generated<string>;
   updated_at: Generated<string>;

@@ -1,5 +1,6 @@
 import { type AccountsTable } from './accounts';
 import { type AuditLogTable } from './audit-log';
+import { type CalendarFeedsTable } from './calendar-feeds';
 import { type ConditionFindingsTable, type ConditionReportsTable } from './condition-reports';
 import { type ConsignmentLinesTable, type ConsignmentsTable } from './consignments';
 import { type FilesTable } from './files';
@@ -9,7 +10,11 @@ import { type OutboxTable } from './outbox';
 import { type PaymentsTable } from './payments';
 import { type SessionsTable } from './sessions';
 import { type SignInLimitsTable } from './sign-in-limits';
-import { type StatementLinesTable, type StatementsTable } from './statements';
+import {
+  type StatementAdjustmentsTable,
+  type StatementLinesTable,
+  type StatementsTable,
+} from './statements';
 import { type StudiosTable } from './studios';
 import { type UsersTable } from './users';
 import { type VenuesTable } from './venues';
@@ -34,8 +39,10 @@ export interface Database {
   condition_findings: ConditionFindingsTable;
   statements: StatementsTable;
   statement_lines: StatementLinesTable;
+  statement_adjustments: StatementAdjustmentsTable;
   payments: PaymentsTable;
   outbox: OutboxTable;
   audit_log: AuditLogTable;
   sign_in_limits: SignInLimitsTable;
+  calendar_feeds: CalendarFeedsTable;
 }

@@ -15,6 +15,8 @@ export interface StudiosTable {
   price_step: Generated<number>;
   /** JSON of the shared Terms schema */
   default_terms: string | null;
+  /** JSON of the shared BankColumns: which column of the bank's CSV holds what */
+  bank_csv_columns: string | null;
   created_at: Generated<string>;
   updated_at: Generated<string>;
 }

@@ -6,6 +6,9 @@ export const publicRoutes = [
   'POST /api/auth/sign-in/email',
   'GET /api/invitations/lookup',
   'POST /api/invitations/accept',
+  'GET /api/calendar/:token.ics',
+  // The payment provider's notices: no session, but a signature checked over the raw body.
+  'POST /api/payments/webhook',
 ] as const;
 
 /**
@@ -59,6 +62,16 @@ export const protectedRoutes: {
   { route: 'POST /api/consignments/:id/agree', roles: ['owner', 'assistant'] },
   { route: 'POST /api/consignments/:id/dispatch', roles: ['owner', 'assistant'] },
   { route: 'POST /api/consignments/:id/cancel', roles: ['owner', 'assistant'] },
+  { route: 'POST /api/consignments/:id/close', roles: ['owner', 'assistant'] },
+  { route: 'GET /api/consignment-lines/:lineId/claim.pdf', roles: ['owner', 'assistant'] },
+  { route: 'GET /api/year', roles: ['owner'] },
+  { route: 'GET /api/calendar-feed', roles: ['owner'] },
+  { route: 'POST /api/bank-imports/matches', roles: ['owner'] },
+  { route: 'POST /api/calendar-feed', roles: ['owner'] },
+  { route: 'DELETE /api/calendar-feed', roles: ['owner'] },
+  { route: 'GET /api/year/sales.csv', roles: ['owner'] },
+  { route: 'GET /api/year/payments.csv', roles: ['owner'] },
+  { route: 'GET /api/year/statements.csv', roles: ['owner'] },
   { route: 'POST /api/consignments/:id/acknowledge', roles: ['gallery'] },
   { route: 'POST /api/consignments/:id/sales', roles: ['owner', 'assistant', 'gallery'] },
   { route: 'POST /api/consignment-lines/:lineId/sale', roles: ['owner', 'assistant', 'gallery'] },
@@ -86,6 +99,15 @@ export const protectedRoutes: {
     route: 'POST /api/consignment-lines/:lineId/condition-reports',
     roles: ['owner', 'assistant', 'gallery'],
   },
+  { route: 'GET /api/statements', roles: ['owner', 'assistant', 'gallery'] },
+  { route: 'POST /api/statements', roles: ['owner'] },
+  { route: 'GET /api/statements/:id.pdf', roles: ['owner', 'assistant', 'gallery'] },
+  { route: 'GET /api/statements/:id', roles: ['owner', 'assistant', 'gallery'] },
+  { route: 'POST /api/statements/:id/issue', roles: ['owner'] },
+  { route: 'POST /api/statements/:id/payments', roles: ['owner'] },
+  { route: 'POST /api/statements/:id/adjustments', roles: ['owner'] },
+  // The assistant's 403 is checked in tests/server/payments.
+  { route: 'POST /api/statements/:id/checkout', roles: ['owner', 'gallery'] },
   { route: 'GET /api/outbox', roles: ['owner'] },
   { route: 'GET /api/outbox/:id', roles: ['owner'] },
   { route: 'GET /api/outbox/:id/attachments/:index', roles: ['owner'] },

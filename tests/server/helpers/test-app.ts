@@ -26,7 +26,14 @@ export async function createTestApp(
   options: Partial<
     Pick<
       AppContext,
-      'signInLimit' | 'trustProxy' | 'mailFrom' | 'renderAttachment' | 'appUrl' | 'filesDir'
+      | 'signInLimit'
+      | 'trustProxy'
+      | 'mailFrom'
+      | 'renderAttachment'
+      | 'appUrl'
+      | 'payments'
+      | 'logger'
+      | 'filesDir'
     >
   > & { publicUrl?: string; dbFile?: string } = {},
 ) {
