@@ -1,26 +1,8 @@
-import { as, consignmentFixture, dispatchedWith } from '../helpers/consignment-fixture';
+import { as } from '../helpers/consignment-fixture';
+import { gbp, issuedStatementFixture } from '../helpers/two-sales-fixture';
 
-const gbp = (amount: number) => ({ amount, currency: 'GBP' });
-
-/** An issued statement of £171.60 owed (venue A: 40% commission, 20% VAT on it, added). */
-async function owedStatement() {
-  const f = await consignmentFixture();
-  const owner = as(f, 'owner');
-  const gallery = as(f, 'gallery');
-  const show = await dispatchedWith(f, f.works);
-  const today = (await owner.get(`/api/consignments/${show.id}`)).body.today as string;
-  await gallery.post(`/api/consignment-lines/${show.lines[0]!.id}/sale`, {
-    soldOn: today,
-    salePrice: gbp(9_000),
-  });
-  await gallery.post(`/api/consignment-lines/${show.lines[1]!.id}/sale`, {
-    soldOn: today,
-    salePrice: gbp(24_000),
-  });
-  const draft = await owner.post('/api/statements', { consignmentId: show.id });
-  const issued = await owner.post(`/api/statements/${draft.body.id}/issue`);
-  return { f, owner, statement: issued.body as { id: number; reference: string } };
-}
+/** An issued statement of £171.60 owed (tests/server/helpers/two-sales-fixture.ts). */
+const owedStatement = issuedStatementFixture;
 
 describe('POST /api/bank-imports/matches', () => {
   it('reads a UK bank’s CSV and pairs each credit with the statement it pays', async () => {

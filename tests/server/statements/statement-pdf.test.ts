@@ -4,36 +4,14 @@ import path from 'node:path';
 import request from 'supertest';
 
 import { pdfPagePng, pdfPages, requirePoppler, squash } from '../../documents/helpers/pdf';
-import { as, consignmentFixture, dispatchedWith } from '../helpers/consignment-fixture';
-
-const gbp = (amount: number) => ({ amount, currency: 'GBP' });
+import { as } from '../helpers/consignment-fixture';
+import { gbp, issuedStatementFixture } from '../helpers/two-sales-fixture';
 
 beforeAll(requirePoppler);
 
-/** An issued statement with two sales (venue A's terms: 40% commission, 20% VAT added). */
-async function issuedStatement() {
-  const f = await consignmentFixture();
-  const owner = as(f, 'owner');
-  const gallery = as(f, 'gallery');
-  const show = await dispatchedWith(f, f.works);
-  const today = (await owner.get(`/api/consignments/${show.id}`)).body.today as string;
-  await gallery.post(`/api/consignment-lines/${show.lines[0]!.id}/sale`, {
-    soldOn: today,
-    salePrice: gbp(9_000),
-    discountReason: 'Returning customer',
-  });
-  await gallery.post(`/api/consignment-lines/${show.lines[1]!.id}/sale`, {
-    soldOn: today,
-    salePrice: gbp(24_000),
-  });
-  const draft = await owner.post('/api/statements', { consignmentId: show.id });
-  const issued = await owner.post(`/api/statements/${draft.body.id}/issue`);
-  return { f, owner, gallery, statement: issued.body };
-}
-
 describe('GET /api/statements/:id.pdf', () => {
   it('prints every sale, the totals, the balance, the pay link and the VAT caution', async () => {
-    const { f, owner, statement } = await issuedStatement();
+    const { f, owner, statement } = await issuedStatementFixture();
     await owner.post(`/api/statements/${statement.id}/payments`, {
       amount: gbp(10_000),
       receivedOn: statement.issuedAt.slice(0, 10),
@@ -60,7 +38,7 @@ describe('GET /api/statements/:id.pdf', () => {
   });
 
   it('is 404 to another studio', async () => {
-    const { f, statement } = await issuedStatement();
+    const { f, statement } = await issuedStatementFixture();
     const res = await as(f, 'otherOwner').get(`/api/statements/${statement.id}.pdf`);
     expect(res.status).toBe(404);
   });

@@ -1,23 +1,9 @@
-import { as, consignmentFixture, dispatchedWith } from '../helpers/consignment-fixture';
+import { as } from '../helpers/consignment-fixture';
+import { gbp, twoSalesFixture } from '../helpers/two-sales-fixture';
 
-const gbp = (amount: number) => ({ amount, currency: 'GBP' });
-
-/** Venue A sells two pieces (40% commission, VAT at 20% added: see tests/server/helpers). */
+/** Venue A's two sales (tests/server/helpers/two-sales-fixture.ts), and their year. */
 async function yearWithSales() {
-  const f = await consignmentFixture();
-  const owner = as(f, 'owner');
-  const gallery = as(f, 'gallery');
-  const show = await dispatchedWith(f, f.works);
-  const today = (await owner.get(`/api/consignments/${show.id}`)).body.today as string;
-  await gallery.post(`/api/consignment-lines/${show.lines[0]!.id}/sale`, {
-    soldOn: today,
-    salePrice: gbp(9_000),
-    discountReason: 'Returning customer',
-  });
-  await gallery.post(`/api/consignment-lines/${show.lines[1]!.id}/sale`, {
-    soldOn: today,
-    salePrice: gbp(24_000),
-  });
+  const { f, owner, today } = await twoSalesFixture();
   return { f, owner, today, year: Number(today.slice(0, 4)) };
 }
 
