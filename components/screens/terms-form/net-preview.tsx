@@ -4,36 +4,12 @@ import { StyleSheet, View } from 'react-native';
 import { Card } from '@/components/ui/card';
 import { parseMoneyText } from '@/components/ui/decimal-text';
 import { MoneyField } from '@/components/ui/money-field';
+import { MoneyLine } from '@/components/ui/money-line';
 import { Heading, Text } from '@/components/ui/text';
 import { palette, spacing } from '@/constants/theme';
-import { formatMoney } from '@/shared/money/format';
 import { makerNet, trySplitSale, venueKeeps } from '@/shared/money/split';
-import { type Money } from '@/shared/schemas/money';
 
 import { previewTerms, type TermsFormValues } from './terms-form-values';
-
-function Line({
-  label,
-  money,
-  testID,
-  strong = false,
-}: {
-  label: string;
-  money: Money;
-  testID: string;
-  strong?: boolean;
-}) {
-  return (
-    <View style={styles.line}>
-      <Text variant={strong ? 'bodyStrong' : 'body'} style={styles.lineLabel}>
-        {label}
-      </Text>
-      <Text variant="number" testID={testID} style={[styles.amount, strong && styles.strong]}>
-        {formatMoney(money)}
-      </Text>
-    </View>
-  );
-}
 
 /**
  * What the maker nets on a sample sale under the terms as they stand in the form, worked out on
@@ -62,34 +38,38 @@ export function NetPreview({ values }: { values: TermsFormValues }) {
       const registered = terms.makerVatRegistered;
       body = (
         <View style={styles.lines} aria-live="polite">
-          <Line label="The buyer pays" money={sample.value} testID="net-preview-price" />
-          <Line
+          <MoneyLine label="The buyer pays" money={sample.value} testID="net-preview-price" />
+          <MoneyLine
             label="The venue keeps"
             money={venueKeeps(terms, split)}
             testID="net-preview-venue"
           />
           {terms.commissionVat !== 'none' ? (
-            <Line
+            <MoneyLine
               label="of which VAT on commission"
               money={split.vatOnCommission}
               testID="net-preview-vat"
             />
           ) : null}
-          <Line
+          <MoneyLine
             label="You receive"
             money={split.makerShare}
             testID="net-preview-share"
             strong={!registered}
           />
           {registered ? (
-            <Line
+            <MoneyLine
               label="You net after VAT"
               money={makerNet(split)}
               testID="net-preview-net"
               strong
             />
           ) : null}
-          <Line label="Insured for" money={split.insuranceValue} testID="net-preview-insured" />
+          <MoneyLine
+            label="Insured for"
+            money={split.insuranceValue}
+            testID="net-preview-insured"
+          />
         </View>
       );
     }
@@ -117,9 +97,5 @@ export function NetPreview({ values }: { values: TermsFormValues }) {
 const styles = StyleSheet.create({
   card: { gap: spacing.md, backgroundColor: palette.accentSoft, borderColor: palette.accent },
   lines: { gap: spacing.xs },
-  line: { flexDirection: 'row', alignItems: 'baseline', gap: spacing.md },
-  lineLabel: { flex: 1 },
-  amount: { textAlign: 'right', minWidth: 96 },
-  strong: { fontFamily: 'AtkinsonHyperlegibleNext_600SemiBold' },
   problem: { color: palette.danger },
 });
