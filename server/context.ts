@@ -110,6 +110,7 @@ export function createContext(options: ContextOptions): AppContext {
       logger: options.logger,
       secret,
       publicUrl,
+      appUrl,
       trustedOrigins: options.trustedOrigins,
     }),
   };

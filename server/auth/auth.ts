@@ -3,6 +3,7 @@ import { createAuthMiddleware } from 'better-auth/api';
 import { type Logger } from 'pino';
 
 import { type Db } from '../db/database';
+import { resetLinkLifetimeMinutes, sendResetLink } from './password-reset.service';
 import { sessionLifetime } from './session-lifetime';
 
 export type AuthOptions = {
@@ -11,6 +12,8 @@ export type AuthOptions = {
   secret: string;
   /** Where people reach the app, e.g. https://saggar.example; null derives it per request. */
   publicUrl: string | null;
+  /** Where links in e-mails point (the page that sets a new password). */
+  appUrl: string;
   /** Origins besides the request's own that may call the auth endpoints (a dev server). */
   trustedOrigins: readonly string[];
 };
@@ -21,6 +24,7 @@ export function createAuth({
   logger,
   secret,
   publicUrl,
+  appUrl,
   trustedOrigins,
 }: AuthOptions): Auth<BetterAuthOptions> {
   const timestamps = { createdAt: 'created_at', updatedAt: 'updated_at' };
@@ -29,8 +33,16 @@ export function createAuth({
     ...(publicUrl ? { baseURL: publicUrl } : {}),
     trustedOrigins: [...trustedOrigins],
     database: { db, type: 'sqlite' },
-    // Accounts are made by the studio (demo seed, invitations), never by public sign-up.
-    emailAndPassword: { enabled: true, disableSignUp: true },
+    emailAndPassword: {
+      enabled: true,
+      // Accounts are made by the studio (demo seed, invitations), never by public sign-up.
+      disableSignUp: true,
+      // "Forgot password?": better-auth makes the one-time token; the e-mail goes by the outbox.
+      sendResetPassword: ({ user, token }) => sendResetLink(db, appUrl, { user, token }),
+      resetPasswordTokenExpiresIn: resetLinkLifetimeMinutes * 60,
+      // Whoever knew the old password is signed out with everyone else.
+      revokeSessionsOnPasswordReset: true,
+    },
     // Failed sign-ins are limited by the Express app, in one place.
     rateLimit: { enabled: false },
     telemetry: { enabled: false },
@@ -76,6 +88,8 @@ export function createAuth({
     verification: {
       modelName: 'verifications',
       fields: { expiresAt: 'expires_at', ...timestamps },
+      // Tokens are kept as hashes, as the invitations' are.
+      storeIdentifier: 'hashed',
     },
     hooks: {
       after: createAuthMiddleware(async (ctx) => {

@@ -1,6 +1,9 @@
 import { type AppContext } from '../context';
 import { countAttempt, forgetAttempts, uncountAttempt } from './sign-in-limits.repository';
 
+/** Where an account's failed sign-ins are counted. */
+export const accountAttemptsKey = (email: string) => `account:${email.toLowerCase()}`;
+
 /**
  * Sign-in attempts counted per account and per client address before each attempt, in the
  * database (so racing attempts and several processes all count). A sign-in that succeeds takes
@@ -11,7 +14,7 @@ export function signInAttempts({ db, signInLimit }: AppContext) {
   return {
     async count(email: string, address: string) {
       const now = new Date();
-      const accountKey = `account:${email.toLowerCase()}`;
+      const accountKey = accountAttemptsKey(email);
       const addressKey = `address:${address}`;
       const account = await countAttempt(db, accountKey, now, windowMs);
       const fromAddress = await countAttempt(db, addressKey, now, windowMs);

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 
+import { newPasswordSchema } from './password';
 import { lineText } from './text';
 
 const tokenSchema = z
@@ -7,12 +8,6 @@ const tokenSchema = z
   .regex(/^[A-Za-z0-9_-]{20,200}$/, {
     error: 'The invitation link is incomplete: open it again from the e-mail.',
   });
-
-/** A password a person chooses: long enough to be hard to guess, short enough to type. */
-export const newPasswordSchema = z
-  .string({ error: 'Choose a password.' })
-  .min(10, { error: 'Use at least 10 characters for the password.' })
-  .max(128, { error: 'Keep the password to 128 characters or fewer.' });
 
 /** `GET /api/invitations/lookup?token=` */
 export const invitationLookupQuerySchema = z.strictObject({ token: tokenSchema });

@@ -14,6 +14,7 @@ export const mailKinds = [
   'invitation',
   'sale',
   'statement',
+  'password-reset',
   'other',
 ] as const;
 export const mailKindSchema = z.enum(mailKinds);
@@ -49,15 +50,22 @@ export const mailAttachmentSchema = z.strictObject({
 export type MailAttachment = z.infer<typeof mailAttachmentSchema>;
 
 /** What the code that makes a change hands to `enqueueMail`, checked before it is written. */
-export const outgoingMailSchema = z.strictObject({
-  studioId: z.number().int().positive().nullable(),
-  to: z.email({ error: 'A message needs one e-mail address to go to.' }),
-  subject: lineText('subject', 300).min(1, { error: 'A message needs a subject.' }),
-  text: z.string().min(1, { error: 'A message needs a plain-text part.' }),
-  html: z.string().nullable().default(null),
-  kind: mailKindSchema,
-  attachments: z.array(mailAttachmentSchema).max(20).default([]),
-});
+export const outgoingMailSchema = z
+  .strictObject({
+    studioId: z.number().int().positive().nullable(),
+    to: z.email({ error: 'A message needs one e-mail address to go to.' }),
+    subject: lineText('subject', 300).min(1, { error: 'A message needs a subject.' }),
+    text: z.string().min(1, { error: 'A message needs a plain-text part.' }),
+    html: z.string().nullable().default(null),
+    kind: mailKindSchema,
+    attachments: z.array(mailAttachmentSchema).max(20).default([]),
+  })
+  // A studio's owner reads its mail under Sent mail: a link to set someone's password must
+  // never be filed there.
+  .refine((mail) => mail.kind !== 'password-reset' || mail.studioId === null, {
+    error: 'A password reset message belongs to no studio.',
+    path: ['studioId'],
+  });
 export type OutgoingMail = z.input<typeof outgoingMailSchema>;
 
 /** `GET /api/outbox` query; numbers arrive as text in a URL. */

@@ -203,6 +203,20 @@ async function buildFixture(dir: string) {
     .where('kind', '=', 'consignment-dispatch')
     .executeTakeFirstOrThrow();
   const invitation = /\/invite\/([A-Za-z0-9_-]+)/.exec(dispatchMail.text_body)![1]!;
+  // A link to choose a new password, for someone who is none of the people calling.
+  await addPerson(f.db, 'forgetful@example.test', []);
+  must(
+    await request(f.app)
+      .post('/api/auth/request-password-reset')
+      .send({ email: 'forgetful@example.test' }),
+    'password reset',
+  );
+  const resetMail = await f.db
+    .selectFrom('outbox')
+    .select('text_body')
+    .where('kind', '=', 'password-reset')
+    .executeTakeFirstOrThrow();
+  const passwordReset = /\/reset-password\/([A-Za-z0-9_-]+)/.exec(resetMail.text_body)![1]!;
 
   const cookies: Record<Person, string | null> = {
     none: null,
@@ -243,6 +257,7 @@ async function buildFixture(dir: string) {
     conditionPhoto: chip.fileId as number,
     dispatchMail: dispatchMail.id,
     invitation,
+    passwordReset,
   };
 }
 type Ids = Awaited<ReturnType<typeof buildFixture>>;
@@ -275,6 +290,22 @@ const matrix: Row[] = [
     route: 'POST /api/auth/sign-in/email',
     call: () => post('/api/auth/sign-in/email', { email: emails.assistant, password }),
     expect: everyone(200),
+  },
+  {
+    route: 'POST /api/auth/request-password-reset',
+    call: () => post('/api/auth/request-password-reset', { email: 'forgetful@example.test' }),
+    expect: everyone(202),
+  },
+  {
+    route: 'GET /api/auth/reset-password/lookup',
+    call: (x) => get(`/api/auth/reset-password/lookup?token=${x.passwordReset}`),
+    expect: everyone(200),
+  },
+  {
+    route: 'POST /api/auth/reset-password',
+    call: (x) =>
+      post('/api/auth/reset-password', { token: x.passwordReset, password: 'a new long password' }),
+    expect: everyone(204),
   },
   {
     route: 'GET /api/invitations/lookup',

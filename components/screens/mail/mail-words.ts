@@ -7,6 +7,7 @@ export const mailKindWords: Record<MailKind, string> = {
   invitation: 'Invitation to sign in',
   sale: 'Sale',
   statement: 'Statement',
+  'password-reset': 'New password link',
   other: 'Message',
 };
 

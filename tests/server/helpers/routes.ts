@@ -4,6 +4,9 @@ type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
 export const publicRoutes = [
   'GET /api/health',
   'POST /api/auth/sign-in/email',
+  'POST /api/auth/request-password-reset',
+  'GET /api/auth/reset-password/lookup',
+  'POST /api/auth/reset-password',
   'GET /api/invitations/lookup',
   'POST /api/invitations/accept',
   'GET /api/calendar/:token.ics',
