@@ -19,6 +19,7 @@ export const staleTimes = {
   statements: 15 * second,
   year: minute,
   invitations: 0,
+  passwordResetLinks: 0,
 } as const;
 
 export function createQueryClient(): QueryClient {

@@ -9,6 +9,7 @@ import { useSchemaForm } from '@/components/ui/form/use-schema-form';
 import { Notice } from '@/components/ui/notice';
 import { Screen } from '@/components/ui/screen';
 import { Heading, Text } from '@/components/ui/text';
+import { TextLink } from '@/components/ui/text-link';
 import { spacing } from '@/constants/theme';
 import { useSignInMutation } from '@/hooks/session';
 import { type SignIn, signInSchema } from '@/shared/schemas/session';
@@ -21,7 +22,8 @@ const signInBinding = bindForm<SignIn, SignIn>(signInSchema, {
   password: { read: textCodec, blank: { required: 'Enter your password.' } },
 });
 
-export function SignInScreen() {
+/** `notice`: news from the page before, such as a password just changed. */
+export function SignInScreen({ notice = null }: { notice?: string | null }) {
   const signIn = useSignInMutation();
   const { control, formState, submit } = useSchemaForm(signInBinding, { email: '', password: '' });
   const send = submit(async (values) => {
@@ -39,6 +41,7 @@ export function SignInScreen() {
       </View>
       <Card style={styles.form}>
         <Heading level={1}>Sign in</Heading>
+        {notice ? <Notice testID="sign-in-notice" tone="info" message={notice} /> : null}
         {formError ? <Notice testID="sign-in-error" message={formError} /> : null}
         <FormText
           control={control}
@@ -71,6 +74,7 @@ export function SignInScreen() {
           busy={formState.isSubmitting}
           onPress={send}
         />
+        <TextLink testID="sign-in-forgot" href="/forgot-password" label="Forgot password?" />
       </Card>
     </Screen>
   );
