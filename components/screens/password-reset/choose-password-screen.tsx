@@ -38,8 +38,8 @@ function NewPasswordForm({ token, email }: { token: string; email: string }) {
   });
   const formError = formState.errors.root?.server?.message;
   return (
-    <Card style={styles.form}>
-      <Text>{`For ${email}. Once it is saved, sign in with it; every device signed in with the old password is signed out.`}</Text>
+    <>
+      <Text>{`For ${email}. Saving it signs this account out on every device; then sign in with the new password.`}</Text>
       {formError ? <Notice testID="reset-error" message={formError} /> : null}
       <FormText
         control={control}
@@ -60,7 +60,7 @@ function NewPasswordForm({ token, email }: { token: string; email: string }) {
         busy={formState.isSubmitting}
         onPress={send}
       />
-    </Card>
+    </>
   );
 }
 
@@ -87,23 +87,25 @@ export function ChoosePasswordScreen({ token }: { token: string }) {
     <Screen testID="choose-password-screen" narrow>
       <View style={styles.intro}>
         <Text variant="display">Saggar</Text>
-        <Heading level={1}>Choose a new password</Heading>
       </View>
-      {link.isPending ? (
-        <LoadingView message="Reading the link…" />
-      ) : link.isError ? (
-        <Card style={styles.form}>
-          <ErrorView error={link.error} />
-          <WayOn />
-        </Card>
-      ) : link.data.state === 'open' ? (
-        <NewPasswordForm token={token} email={link.data.email} />
-      ) : (
-        <Card style={styles.form}>
-          <Notice testID="reset-closed" message={closedWords[link.data.state]} />
-          <WayOn />
-        </Card>
-      )}
+      <Card style={styles.form}>
+        <Heading level={1}>Choose a new password</Heading>
+        {link.isPending ? (
+          <LoadingView message="Reading the link…" />
+        ) : link.isError ? (
+          <>
+            <ErrorView error={link.error} />
+            <WayOn />
+          </>
+        ) : link.data.state === 'open' ? (
+          <NewPasswordForm token={token} email={link.data.email} />
+        ) : (
+          <>
+            <Notice testID="reset-closed" message={closedWords[link.data.state]} />
+            <WayOn />
+          </>
+        )}
+      </Card>
     </Screen>
   );
 }
