@@ -1,5 +1,6 @@
 import { type Db } from '../db/database';
 import { countAttempt } from './sign-in-limits.repository';
+import { minutesToWait } from './wait-words';
 
 /**
  * Requests for a link to choose a new password, per address asked for and per client address,
@@ -7,11 +8,6 @@ import { countAttempt } from './sign-in-limits.repository';
  * tells nothing about it either.
  */
 export const resetRequestLimit = { perAccount: 3, perAddress: 20, windowMs: 60 * 60 * 1000 };
-
-const minutesWords = (ms: number) => {
-  const minutes = Math.max(1, Math.ceil(ms / 60_000));
-  return `${minutes} ${minutes === 1 ? 'minute' : 'minutes'}`;
-};
 
 /** Counts one request before it is acted on; answers whether it is over either limit. */
 export async function countResetRequest(db: Db, email: string, address: string, now = new Date()) {
@@ -29,7 +25,7 @@ export async function countResetRequest(db: Db, email: string, address: string, 
     refused: overAccount || overAddress,
     retryAfterSeconds: Math.max(1, Math.ceil(wait / 1000)),
     message: overAccount
-      ? `Links for this address have been asked for ${perAccount} times in the last hour. Use the newest e-mail, or wait ${minutesWords(wait)} and ask again.`
-      : `Too many links have been asked for from here. Wait ${minutesWords(wait)} and try again.`,
+      ? `Links for this address have been asked for ${perAccount} times in the last hour. Use the newest e-mail, or wait ${minutesToWait(until, now.getTime())} and ask again.`
+      : `Too many links have been asked for from here. Wait ${minutesToWait(until, now.getTime())} and try again.`,
   };
 }

@@ -1,5 +1,6 @@
 import { type AppContext } from '../context';
 import { countAttempt, forgetAttempts, uncountAttempt } from './sign-in-limits.repository';
+import { minutesToWait } from './wait-words';
 
 /** Where an account's failed sign-ins are counted. */
 export const accountAttemptsKey = (email: string) => `account:${email.toLowerCase()}`;
@@ -24,13 +25,13 @@ export function signInAttempts({ db, signInLimit }: AppContext) {
         overAccount ? Date.parse(account.window_ends_at) : 0,
         overAddress ? Date.parse(fromAddress.window_ends_at) : 0,
       );
-      const minutes = Math.max(1, Math.ceil((until - now.getTime()) / 60_000));
+      const wait = minutesToWait(until, now.getTime());
       return {
         refused: overAccount || overAddress,
         retryAfterSeconds: Math.max(1, Math.ceil((until - now.getTime()) / 1000)),
         message: overAccount
-          ? `Too many failed sign-ins for this account. Wait ${minutes} minutes and try again.`
-          : `Too many failed sign-ins from here. Wait ${minutes} minutes and try again.`,
+          ? `Too many failed sign-ins for this account. Wait ${wait} and try again.`
+          : `Too many failed sign-ins from here. Wait ${wait} and try again.`,
         async succeeded() {
           await forgetAttempts(db, accountKey);
           await uncountAttempt(db, addressKey);

@@ -30,7 +30,7 @@ describe('POST /api/auth/sign-in/email limits', () => {
     expect(refused.body).toEqual({
       error: {
         code: 'too_many_requests',
-        message: 'Too many failed sign-ins for this account. Wait 1 minutes and try again.',
+        message: 'Too many failed sign-ins for this account. Wait 1 minute and try again.',
       },
     });
     expect(Number(refused.headers['retry-after'])).toBeGreaterThan(0);
