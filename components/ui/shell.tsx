@@ -157,8 +157,8 @@ export function Shell({ nav, me, membership, children }: ShellProps) {
     <View testID="shell-narrow" style={styles.narrow}>
       <View role="banner" style={styles.header}>
         <View style={styles.headerText}>
-          {/* The venue alone on a phone: "· work from …" would be cut off. */}
-          <Text variant="bodyStrong" numberOfLines={1}>
+          {/* The venue alone on a phone, "· work from …" left out; a long name takes two lines. */}
+          <Text variant="bodyStrong" numberOfLines={2} testID="shell-place">
             {membership.venueName ?? membership.studioName}
           </Text>
           <Text variant="small" numberOfLines={1}>
