@@ -28,7 +28,7 @@ describe('netSummaryText, the one-line net preview that stays in view on a phone
 
   it('waits for rates it can read and a sample price', () => {
     expect(netSummaryText({ ...usual, commissionRate: '140' }, '100')).toBe(
-      'Complete the rates to see what you would net.',
+      'Complete the rates to see your net.',
     );
     expect(netSummaryText(usual, '')).toBe('Enter a sample price below to see the split.');
   });

@@ -1,5 +1,6 @@
-import { Platform, StyleSheet, View, type ViewStyle } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 
+import { stickyOnWeb } from '@/components/ui/sticky';
 import { Text } from '@/components/ui/text';
 import { palette, spacing } from '@/constants/theme';
 import { formatMoney } from '@/shared/money/format';
@@ -11,7 +12,7 @@ import { type TermsFormValues } from './terms-form-values';
 /** One line of what the sample sale nets, for a bar that stays in view while terms change. */
 export function netSummaryText(values: TermsFormValues, sampleText: string): string {
   const preview = previewSplit(values, sampleText);
-  if (preview.kind === 'incomplete') return 'Complete the rates to see what you would net.';
+  if (preview.kind === 'incomplete') return 'Complete the rates to see your net.';
   if (preview.kind === 'no-sample') return 'Enter a sample price below to see the split.';
   if (preview.kind === 'share-below-zero') return 'The commission and its VAT exceed the sale.';
   const { terms, split, sample } = preview;
@@ -21,11 +22,8 @@ export function netSummaryText(values: TermsFormValues, sampleText: string): str
     : receive;
 }
 
-// The web keeps the bar at the foot of the screen while the fields above it scroll past; React
-// Native's types know no `sticky`, which react-native-web hands to CSS as it is.
-const stickyOnWeb = (Platform.OS === 'web'
-  ? { position: 'sticky', bottom: 0 }
-  : {}) as unknown as ViewStyle;
+// At the foot of the screen while the fields above it scroll past.
+const stuck = stickyOnWeb('bottom');
 
 /**
  * The net preview in one line at the bottom of the screen, on a phone, where the full preview
@@ -39,7 +37,7 @@ export function NetSummary({
   sampleText: string;
 }) {
   return (
-    <View testID="net-summary" style={[styles.bar, stickyOnWeb]}>
+    <View testID="net-summary" style={[styles.bar, stuck]}>
       <Text variant="bodyStrong" testID="net-summary-text">
         {netSummaryText(values, sampleText)}
       </Text>

@@ -9,6 +9,7 @@ import { FormChoice, FormText } from '@/components/ui/form/fields';
 import { useSchemaForm } from '@/components/ui/form/use-schema-form';
 import { FormFooter } from '@/components/ui/form-footer';
 import { Notice } from '@/components/ui/notice';
+import { stickyOnWeb } from '@/components/ui/sticky';
 import { Heading, Text } from '@/components/ui/text';
 import { spacing } from '@/constants/theme';
 import { useBreakpoint } from '@/hooks/use-breakpoint';
@@ -200,5 +201,6 @@ const styles = StyleSheet.create({
   termsWide: { flexDirection: 'row', alignItems: 'flex-start' },
   termsFields: { flex: 1 },
   preview: {},
-  previewWide: { width: 320 },
+  // Beside the terms, and still in view as the terms below the first few are changed.
+  previewWide: { width: 320, ...stickyOnWeb('top', spacing.lg) },
 });
