@@ -1,5 +1,7 @@
 import { AtkinsonHyperlegibleNext_400Regular } from '@expo-google-fonts/atkinson-hyperlegible-next/400Regular';
 import { AtkinsonHyperlegibleNext_600SemiBold } from '@expo-google-fonts/atkinson-hyperlegible-next/600SemiBold';
+import { IBMPlexSans_400Regular } from '@expo-google-fonts/ibm-plex-sans/400Regular';
+import { IBMPlexSans_600SemiBold } from '@expo-google-fonts/ibm-plex-sans/600SemiBold';
 import { Literata_500Medium } from '@expo-google-fonts/literata/500Medium';
 import { Literata_600SemiBold } from '@expo-google-fonts/literata/600SemiBold';
 
@@ -9,4 +11,14 @@ export const fontFiles = {
   Literata_600SemiBold,
   AtkinsonHyperlegibleNext_400Regular,
   AtkinsonHyperlegibleNext_600SemiBold,
+  IBMPlexSans_400Regular,
+  IBMPlexSans_600SemiBold,
 };
+
+/**
+ * The body text's font. Native text takes one family, not a stack, so it stays with the text
+ * face (its zero slashed); the web puts the figures face first (font-files.web.ts).
+ */
+export function textFace(text: keyof typeof fontFiles, _figures: keyof typeof fontFiles): string {
+  return text;
+}

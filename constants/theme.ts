@@ -1,6 +1,6 @@
 import { type TextStyle } from 'react-native';
 
-import { fontFiles } from './font-files';
+import { fontFiles, textFace } from './font-files';
 
 /**
  * Saggar's look: warm paper, ink, and one accent from a celadon glaze.
@@ -42,19 +42,21 @@ export const stateTones = {
 } as const;
 export type StateTone = keyof typeof stateTones;
 
-/**
- * Fonts shipped with the app, keyed by the family name styles use. Atkinson Hyperlegible Next has
- * a working `tnum` feature (its GSUB table maps all ten proportional digits to 632-unit tabular
- * ones), so it serves for figures as well as text.
- */
+/** Fonts shipped with the app, keyed by the family name styles use. */
 export const fontAssets = fontFiles;
 
+/**
+ * Body text is Atkinson Hyperlegible Next, with its digits from IBM Plex Sans on the web: Atkinson's
+ * zero is slashed (it has no plain one), which makes £100.00 and 2026 look foreign. Plex's digits
+ * are near Atkinson's in height (0.71 against 0.68 of the em) and all one width, so figures still
+ * line up in tables. Literata's own zero is plain, and tabular with `tnum`.
+ */
 export const fonts = {
   heading: 'Literata_600SemiBold',
   headingLight: 'Literata_500Medium',
-  body: 'AtkinsonHyperlegibleNext_400Regular',
-  bodyStrong: 'AtkinsonHyperlegibleNext_600SemiBold',
-} as const satisfies Record<string, keyof typeof fontAssets>;
+  body: textFace('AtkinsonHyperlegibleNext_400Regular', 'IBMPlexSans_400Regular'),
+  bodyStrong: textFace('AtkinsonHyperlegibleNext_600SemiBold', 'IBMPlexSans_600SemiBold'),
+} as const;
 
 export const spacing = {
   xxs: 2,

@@ -6,7 +6,7 @@ import path from 'node:path';
 
 import subsetFont from 'subset-font';
 
-import { subsetFeatures, subsetFonts, subsetText } from './font-subset';
+import { figures, subsetFeatures, subsetFonts, subsetText } from './font-subset';
 
 const root = path.join(__dirname, '..');
 
@@ -14,7 +14,7 @@ async function main() {
   const text = subsetText();
   for (const font of subsetFonts) {
     const source = fs.readFileSync(font.source);
-    const subset = await subsetFont(source, text, {
+    const subset = await subsetFont(source, font.keep === 'text' ? text : figures, {
       targetFormat: 'woff2',
       keepFeatures: [...subsetFeatures],
     });

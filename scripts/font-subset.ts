@@ -7,17 +7,25 @@ import path from 'node:path';
 
 const googleFonts = path.join(__dirname, '../node_modules/@expo-google-fonts');
 
-/** Source .ttf (kept in node_modules for the server's PDFs) and the WOFF2 subset made from it. */
+/**
+ * Source .ttf (kept in node_modules for the server's PDFs) and the WOFF2 subset made from it.
+ * `text` faces keep the ranges below; `figures` faces keep the ten digits alone, and the web's
+ * font stack puts them ahead of the text face (constants/font-files.web.ts): Atkinson Hyperlegible
+ * Next draws its zero slashed, with no plain alternate, and a slashed zero in a price or a date
+ * reads as a foreign symbol.
+ */
 export const subsetFonts = [
   {
     family: 'Literata_500Medium',
     source: path.join(googleFonts, 'literata/500Medium/Literata_500Medium.ttf'),
     target: 'assets/fonts/literata-500-medium.woff2',
+    keep: 'text',
   },
   {
     family: 'Literata_600SemiBold',
     source: path.join(googleFonts, 'literata/600SemiBold/Literata_600SemiBold.ttf'),
     target: 'assets/fonts/literata-600-semibold.woff2',
+    keep: 'text',
   },
   {
     family: 'AtkinsonHyperlegibleNext_400Regular',
@@ -26,6 +34,7 @@ export const subsetFonts = [
       'atkinson-hyperlegible-next/400Regular/AtkinsonHyperlegibleNext_400Regular.ttf',
     ),
     target: 'assets/fonts/atkinson-hyperlegible-next-400-regular.woff2',
+    keep: 'text',
   },
   {
     family: 'AtkinsonHyperlegibleNext_600SemiBold',
@@ -34,8 +43,24 @@ export const subsetFonts = [
       'atkinson-hyperlegible-next/600SemiBold/AtkinsonHyperlegibleNext_600SemiBold.ttf',
     ),
     target: 'assets/fonts/atkinson-hyperlegible-next-600-semibold.woff2',
+    keep: 'text',
+  },
+  {
+    family: 'IBMPlexSans_400Regular',
+    source: path.join(googleFonts, 'ibm-plex-sans/400Regular/IBMPlexSans_400Regular.ttf'),
+    target: 'assets/fonts/ibm-plex-sans-400-regular-figures.woff2',
+    keep: 'figures',
+  },
+  {
+    family: 'IBMPlexSans_600SemiBold',
+    source: path.join(googleFonts, 'ibm-plex-sans/600SemiBold/IBMPlexSans_600SemiBold.ttf'),
+    target: 'assets/fonts/ibm-plex-sans-600-semibold-figures.woff2',
+    keep: 'figures',
   },
 ] as const;
+
+/** What a figures face keeps. */
+export const figures = '0123456789';
 
 /** Unicode blocks (first and last code point, inclusive) and single characters kept. */
 export const subsetRanges: readonly (readonly [number, number])[] = [

@@ -7,7 +7,7 @@ import {
   rowSortingFeature,
   tableFeatures,
 } from '@tanstack/react-table';
-import { type ReactNode } from 'react';
+import { type ReactNode, useState } from 'react';
 import { Pressable, ScrollView, StyleSheet, View } from 'react-native';
 
 import { palette, radii, spacing, touchTarget } from '@/constants/theme';
@@ -38,6 +38,8 @@ type DataTableProps<TData extends RowData> = {
   /** Narrowest the wide table gets before it scrolls sideways. */
   minWidth?: number;
 };
+
+const fixed = { flexGrow: 0, flexShrink: 0, flexBasis: 'auto' } as const;
 
 const sortWords = { asc: 'ascending', desc: 'descending' } as const;
 
@@ -96,6 +98,9 @@ export function DataTable<TData extends RowData>({
   minWidth = 720,
 }: DataTableProps<TData>) {
   const { wide } = useBreakpoint();
+  // The room the table has: inside a sideways scroller its width would otherwise follow its
+  // longest unwrapped text, and one long name would push the last columns out of sight.
+  const [room, setRoom] = useState(0);
   const rows = table.getRowModel().rows;
 
   if (!wide) {
@@ -111,12 +116,20 @@ export function DataTable<TData extends RowData>({
   }
 
   return (
-    <ScrollView horizontal contentContainerStyle={styles.scroller}>
+    <ScrollView
+      horizontal
+      contentContainerStyle={styles.scroller}
+      onLayout={(event) => setRoom(event.nativeEvent.layout.width)}
+    >
       <View
         testID={`${testID}-table`}
         role="table"
         aria-label={label}
-        style={[styles.table, { minWidth }]}
+        style={[
+          styles.table,
+          { minWidth },
+          room > 0 && { ...fixed, width: Math.max(minWidth, room) },
+        ]}
       >
         <View role="rowgroup">
           {table.getHeaderGroups().map((group) => (
@@ -137,6 +150,9 @@ export function DataTable<TData extends RowData>({
                   >
                     {header.isPlaceholder ? null : header.column.getCanSort() ? (
                       <SortButton header={header} title={title} />
+                    ) : typeof header.column.columnDef.header === 'string' ? (
+                      // A bare string would be drawn in the browser's default face.
+                      <Text variant="label">{title}</Text>
                     ) : (
                       <table.FlexRender header={header} />
                     )}

@@ -63,6 +63,8 @@ export function moneyText(money: Money | null | undefined): string {
 export function parsePercentText(text: string): Parsed<number> {
   const cleaned = text.trim().replace(/%$/, '').trim();
   if (cleaned === '') return { kind: 'empty' };
+  if (cleaned.startsWith('-'))
+    return { kind: 'invalid', message: 'A percentage cannot be below 0.' };
   const bp = scaleDecimal(cleaned, 2);
   if (bp === null) {
     return { kind: 'invalid', message: 'Enter a percentage such as 40 or 17.5.' };

@@ -156,17 +156,21 @@ export function Shell({ nav, me, membership, children }: ShellProps) {
   return (
     <View testID="shell-narrow" style={styles.narrow}>
       <View role="banner" style={styles.header}>
-        <View style={styles.headerText}>
-          {/* The venue alone on a phone: "· work from …" would be cut off. */}
-          <Text variant="bodyStrong" numberOfLines={1}>
-            {membership.venueName ?? membership.studioName}
-          </Text>
-          <Text variant="small" numberOfLines={1}>
+        {/*
+          The venue alone on a phone, "· work from …" left out. The name has the header's whole
+          width, the buttons going on the line below, so a long one wraps to two lines instead of
+          being cut off beside them.
+        */}
+        <Text variant="bodyStrong" numberOfLines={2} testID="shell-place">
+          {membership.venueName ?? membership.studioName}
+        </Text>
+        <View style={styles.headerRow}>
+          <Text variant="small" numberOfLines={1} style={styles.headerText}>
             {me.user.name}
           </Text>
+          {switchLink}
+          {signOutButton}
         </View>
-        {switchLink}
-        {signOutButton}
       </View>
       {problem}
       <View style={styles.content}>{children}</View>
@@ -210,15 +214,13 @@ const styles = StyleSheet.create({
   content: { flex: 1 },
   narrow: { flex: 1, backgroundColor: palette.paper },
   header: {
-    flexDirection: 'row',
-    alignItems: 'center',
-    gap: spacing.sm,
     paddingHorizontal: spacing.lg,
-    paddingVertical: spacing.sm,
+    paddingTop: spacing.sm,
     backgroundColor: palette.sunken,
     borderBottomWidth: 1,
     borderBottomColor: palette.hairline,
   },
+  headerRow: { flexDirection: 'row', alignItems: 'center', gap: spacing.sm },
   headerText: { flex: 1 },
   tabBar: {
     flexDirection: 'row',

@@ -67,7 +67,7 @@ export function termsInWords(terms: Terms): string[] {
       : 'The venue buys the work on sale or return.',
     commission(terms),
     terms.makerVatRegistered
-      ? 'The maker is VAT-registered: prices include the maker’s VAT.'
+      ? `The maker is VAT-registered: prices include the maker’s VAT at ${percent(terms.vatRateBp)}.`
       : 'The maker is not VAT-registered.',
     discounts[terms.discountRule],
     insurance(terms),

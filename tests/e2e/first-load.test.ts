@@ -37,12 +37,8 @@ describe('the first load', () => {
     }
     expect(scripts.map(pathOf)).not.toContainEqual(expect.stringContaining('studio-screens'));
     const fonts = responses.filter((r) => /\.(woff2|ttf|otf)$/.test(pathOf(r)));
-    expect(fonts.map((r) => pathOf(r).split('.').at(-1))).toEqual([
-      'woff2',
-      'woff2',
-      'woff2',
-      'woff2',
-    ]);
+    // Two faces each of Literata and Atkinson Hyperlegible Next, and two of IBM Plex Sans's digits.
+    expect(fonts.map((r) => pathOf(r).split('.').at(-1))).toEqual(Array(6).fill('woff2'));
     const html = responses.find((r) => pathOf(r) === '/sign-in');
     expect(await html?.headerValue('cache-control')).toBe('no-cache');
     // The faces the sign-in form draws with came from those files and are in use.

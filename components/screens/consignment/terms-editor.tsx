@@ -24,7 +24,8 @@ export function TermsEditor({
   onDone: () => void;
 }) {
   const update = useConsignmentUpdateMutation(consignmentId);
-  const form = useSchemaForm(termsBinding, termsValues(terms));
+  // As in the venue's form, a rate out of range is said while it is typed.
+  const form = useSchemaForm(termsBinding, termsValues(terms), 'onChange');
   const values = form.watch();
   return (
     <FormProvider {...form}>

@@ -16,6 +16,8 @@ import { spacing } from '@/constants/theme';
 import { useStudioQuery, useStudioUpdateMutation } from '@/hooks/queries/studio';
 import { activeMembership, useMeQuery } from '@/hooks/session';
 import { formatMoney } from '@/shared/money/format';
+import { roundUpToStep } from '@/shared/money/rounding';
+import { type Money } from '@/shared/schemas/money';
 import {
   type StudioSettings,
   type StudioSettingsUpdate,
@@ -23,6 +25,7 @@ import {
 } from '@/shared/schemas/studio';
 
 import { CalendarCard } from './calendar-card';
+import { nextStockNumberFor } from './next-stock-number';
 
 type SettingsValues = { stockNumberPattern: string; priceStep: string };
 
@@ -44,6 +47,16 @@ function settingsBinding(currency: string) {
   });
 }
 
+/**
+ * What the step is for, with an example worked by the shared rounding: a list price planned
+ * from the net the maker wants is rounded up to a multiple of it.
+ */
+function priceStepHint(step: Money): string {
+  const worked = { amount: step.amount * 12 + Math.ceil(step.amount / 4), currency: step.currency };
+  const listed = { amount: roundUpToStep(worked.amount, step.amount), currency: step.currency };
+  return `A price worked out from the net you want is rounded up to a multiple of this: with ${formatMoney(step)}, ${formatMoney(worked)} becomes ${formatMoney(listed)}.`;
+}
+
 const valuesOf = (settings: StudioSettings): SettingsValues => ({
   stockNumberPattern: settings.stockNumberPattern,
   priceStep: moneyText({ amount: settings.priceStep, currency: settings.currency }),
@@ -51,10 +64,14 @@ const valuesOf = (settings: StudioSettings): SettingsValues => ({
 
 function SettingsForm({ settings }: { settings: StudioSettings }) {
   const update = useStudioUpdateMutation();
-  const { control, formState, reset, submit } = useSchemaForm(
+  // onChange: a pattern the server would refuse is said while it is typed, as the preview follows.
+  const { control, formState, reset, submit, watch } = useSchemaForm(
     settingsBinding(settings.currency),
     valuesOf(settings),
+    'onChange',
   );
+  const next = nextStockNumberFor(settings, watch('stockNumberPattern'), new Date());
+  const step = moneyCodec(settings.currency)(watch('priceStep'));
   const save = submit(async (values) => {
     // The saved values become the form's baseline, so "saved" shows until the next edit.
     reset(valuesOf(await update.mutateAsync(values)));
@@ -71,16 +88,21 @@ function SettingsForm({ settings }: { settings: StudioSettings }) {
         autoCapitalize="characters"
         autoCorrect={false}
       />
-      <Text
-        variant="small"
-        testID="settings-next"
-      >{`Next stock number: ${settings.nextStockNumber}`}</Text>
+      <Text variant="small" testID="settings-next" aria-live="polite">
+        {next === null
+          ? 'Next stock number: shown when the pattern is complete.'
+          : `Next stock number: ${next}`}
+      </Text>
       <FormMoney
         control={control}
         name="priceStep"
         testID="settings-price-step"
         label="Price step"
-        hint="Planned list prices are rounded up to a multiple of this."
+        hint={priceStepHint(
+          step.kind === 'ok' && step.value.amount > 0
+            ? step.value
+            : { amount: settings.priceStep, currency: settings.currency },
+        )}
         currency={settings.currency}
       />
       {formError ? <Notice message={formError} /> : null}

@@ -7,6 +7,7 @@ import { FieldCell, FieldRow } from '@/components/ui/field-row';
 import { FormChoice, FormMoney, FormNumber, FormText } from '@/components/ui/form/fields';
 import { Heading } from '@/components/ui/text';
 import { spacing } from '@/constants/theme';
+import { type CommissionVat } from '@/shared/schemas/terms';
 
 import {
   commissionVatWords,
@@ -17,7 +18,14 @@ import {
   paymentFromWords,
   venueRoleWords,
 } from '../venue-form/venue-words';
-import { type TermsFormValues } from './terms-form-values';
+import { type TermsFormValues, vatRateApplies } from './terms-form-values';
+
+/** What the VAT rate is used for, so the field says why it is asked. */
+function vatRateHint(commissionVat: CommissionVat, makerVatRegistered: 'yes' | 'no'): string {
+  const onCommission = commissionVat !== 'none';
+  if (onCommission && makerVatRegistered === 'yes') return 'On the commission and in your prices.';
+  return onCommission ? 'Charged on the commission.' : 'Included in your prices.';
+}
 
 type TermsFieldsProps = {
   heading: string;
@@ -34,6 +42,8 @@ type TermsFieldsProps = {
 export function TermsFields({ heading, intro, testIDPrefix }: TermsFieldsProps) {
   const { control } = useFormContext<TermsFormValues>();
   const basis = useWatch({ control, name: 'insuranceBasis' });
+  const commissionVat = useWatch({ control, name: 'commissionVat' });
+  const makerVatRegistered = useWatch({ control, name: 'makerVatRegistered' });
   const typed = useWatch({ control, name: 'currency' }).trim().toUpperCase();
   const currency = /^[A-Z]{3}$/.test(typed) ? typed : 'GBP';
   const field = { control } as const;
@@ -50,16 +60,6 @@ export function TermsFields({ heading, intro, testIDPrefix }: TermsFieldsProps) 
             unit="%"
             decimal
             label="Commission"
-          />
-        </FieldCell>
-        <FieldCell basis={140}>
-          <FormNumber
-            {...field}
-            name="vatRate"
-            testID={`${testIDPrefix}-vatRate`}
-            unit="%"
-            decimal
-            label="VAT rate"
           />
         </FieldCell>
         <FieldCell basis={120}>
@@ -97,6 +97,21 @@ export function TermsFields({ heading, intro, testIDPrefix }: TermsFieldsProps) 
           { value: 'yes', label: 'Yes' },
         ]}
       />
+      {vatRateApplies({ commissionVat, makerVatRegistered }) ? (
+        <FieldRow>
+          <FieldCell basis={140}>
+            <FormNumber
+              {...field}
+              name="vatRate"
+              testID={`${testIDPrefix}-vatRate`}
+              unit="%"
+              decimal
+              label="VAT rate"
+              hint={vatRateHint(commissionVat, makerVatRegistered)}
+            />
+          </FieldCell>
+        </FieldRow>
+      ) : null}
       <FormChoice
         {...field}
         name="discountRule"

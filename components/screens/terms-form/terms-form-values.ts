@@ -9,6 +9,7 @@ import {
 } from '@/components/ui/form/codecs';
 import {
   type CommissionVat,
+  defaultTerms,
   type DiscountRule,
   type InsuranceBasis,
   type Insurer,
@@ -53,6 +54,22 @@ export function termsValues(terms: Terms): TermsFormValues {
   };
 }
 
+/** Whether the terms use their VAT rate: on the commission, or in a registered maker's prices. */
+export function vatRateApplies(
+  values: Pick<TermsFormValues, 'commissionVat' | 'makerVatRegistered'>,
+): boolean {
+  return values.commissionVat !== 'none' || values.makerVatRegistered === 'yes';
+}
+
+/**
+ * The rate of terms that charge no VAT, whose field is hidden: kept when it reads, otherwise the
+ * usual rate, so a value nobody can see never stops the form being saved.
+ */
+function unusedVatRate(text: string): Parsed<number> {
+  const read = percentCodec(text);
+  return read.kind === 'ok' ? read : { kind: 'ok', value: defaultTerms.vatRateBp };
+}
+
 /** A code typed in capitals or not (a currency, a country); blank is none. */
 export const codeCodec = (text: string): Parsed<string> =>
   text.trim() === '' ? { kind: 'empty' } : { kind: 'ok', value: text.trim().toUpperCase() };
@@ -75,7 +92,7 @@ export function termsFields<Values extends TermsFormValues>(
     },
     vatRate: {
       ...at('vatRateBp'),
-      read: percentCodec,
+      read: (text, values) => (vatRateApplies(values) ? percentCodec(text) : unusedVatRate(text)),
       blank: { required: 'Enter the VAT rate, such as 20.' },
     },
     venueRole: { ...at('venueRole'), read: choiceCodec },

@@ -3,7 +3,7 @@ import { StyleSheet, View } from 'react-native';
 
 import { Screen } from '@/components/ui/screen';
 import { ErrorView, LoadingView } from '@/components/ui/status-views';
-import { Heading } from '@/components/ui/text';
+import { Heading, Text } from '@/components/ui/text';
 import { TextLink } from '@/components/ui/text-link';
 import { spacing } from '@/constants/theme';
 import { useVenueQuery, useVenueUpdateMutation } from '@/hooks/queries/venues';
@@ -28,10 +28,13 @@ export function VenueEditScreen({ id }: { id: number }) {
         <>
           <View style={styles.heading}>
             <TextLink href={back} label={`Back to ${venue.data.venue.name}`} />
-            <Heading level={1}>Edit {venue.data.venue.name}</Heading>
+            <Text variant="small" testID="venue-edit-what">
+              {owner ? 'Edit venue and terms' : 'Venue details'}
+            </Text>
+            <Heading level={1}>{venue.data.venue.name}</Heading>
           </View>
           <VenueForm
-            label={`Edit ${venue.data.venue.name}`}
+            label={`${owner ? 'Edit venue and terms' : 'Venue details'}: ${venue.data.venue.name}`}
             defaultValues={venueValues(venue.data.venue)}
             binding={owner ? venueUpdateBindings.withTerms : venueUpdateBindings.detailsOnly}
             termsEditable={owner}

@@ -1,3 +1,4 @@
+import { useState } from 'react';
 import { FormProvider } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 
@@ -8,11 +9,14 @@ import { FormChoice, FormText } from '@/components/ui/form/fields';
 import { useSchemaForm } from '@/components/ui/form/use-schema-form';
 import { FormFooter } from '@/components/ui/form-footer';
 import { Notice } from '@/components/ui/notice';
+import { stickyOnWeb } from '@/components/ui/sticky';
 import { Heading, Text } from '@/components/ui/text';
 import { spacing } from '@/constants/theme';
 import { useBreakpoint } from '@/hooks/use-breakpoint';
 
 import { NetPreview } from '../terms-form/net-preview';
+import { NetSummary } from '../terms-form/net-summary';
+import { firstSample } from '../terms-form/preview-split';
 import { TermsFields } from '../terms-form/terms-fields';
 import { type VenueFormValues } from './venue-form-values';
 import { options, venueKindWords } from './venue-words';
@@ -27,7 +31,10 @@ type VenueFormProps<Parsed> = {
   termsEditable: boolean;
 };
 
-/** A venue and its default terms, with what the maker would net shown beside the terms. */
+/**
+ * A venue and its default terms, with what the maker would net beside the terms; on a phone, where
+ * the preview comes after them, a one-line summary stays at the foot of the screen meanwhile.
+ */
 export function VenueForm<Parsed>({
   defaultValues,
   binding,
@@ -37,9 +44,11 @@ export function VenueForm<Parsed>({
   termsEditable,
 }: VenueFormProps<Parsed>) {
   const { wide } = useBreakpoint();
-  const form = useSchemaForm(binding, defaultValues);
+  // A rate out of range is said as it is typed, beside its field, while the preview follows it.
+  const form = useSchemaForm(binding, defaultValues, 'onChange');
   const { control, formState, submit, watch } = form;
   const terms = watch();
+  const sample = useState(firstSample);
   const field = { control } as const;
 
   const termsFields = !termsEditable ? (
@@ -152,9 +161,12 @@ export function VenueForm<Parsed>({
         </Card>
 
         <View style={[styles.terms, wide && styles.termsWide]}>
-          <View style={styles.termsFields}>{termsFields}</View>
+          <View style={styles.termsFields}>
+            {termsFields}
+            {termsEditable && !wide ? <NetSummary values={terms} sampleText={sample[0]} /> : null}
+          </View>
           <View style={[styles.preview, wide && styles.previewWide]}>
-            <NetPreview values={terms} />
+            <NetPreview values={terms} sample={sample} />
           </View>
         </View>
 
@@ -189,5 +201,6 @@ const styles = StyleSheet.create({
   termsWide: { flexDirection: 'row', alignItems: 'flex-start' },
   termsFields: { flex: 1 },
   preview: {},
-  previewWide: { width: 320 },
+  // Beside the terms, and still in view as the terms below the first few are changed.
+  previewWide: { width: 320, ...stickyOnWeb('top', spacing.lg) },
 });

@@ -4,9 +4,9 @@ import {
   type InsuranceBasis,
   type Insurer,
   type PaymentTerms,
-  type VenueRole,
-} from '@/shared/schemas/terms';
+ type Terms,  type VenueRole } from '@/shared/schemas/terms';
 import { type VenueKind } from '@/shared/schemas/venue';
+import { percent } from '@/shared/terms/terms-in-words';
 
 export const venueKindWords: Record<VenueKind, string> = {
   gallery: 'Gallery',
@@ -26,6 +26,24 @@ export const commissionVatWords: Record<CommissionVat, string> = {
   added: 'VAT added on top',
   included: 'VAT included in the rate',
 };
+
+/**
+ * VAT on the commission as terms show it: the rate only where VAT is charged, so a venue that is
+ * not registered never reads as charging 20%.
+ */
+export function commissionVatText(terms: Pick<Terms, 'commissionVat' | 'vatRateBp'>): string {
+  const rate = percent(terms.vatRateBp);
+  if (terms.commissionVat === 'added') return `VAT at ${rate} added on top`;
+  if (terms.commissionVat === 'included') return `VAT at ${rate} included in the rate`;
+  return 'No VAT on commission';
+}
+
+/** Whether the maker is VAT-registered, with the rate in their prices when they are. */
+export function makerVatText(terms: Pick<Terms, 'makerVatRegistered' | 'vatRateBp'>): string {
+  return terms.makerVatRegistered
+    ? `Yes: your prices include VAT at ${percent(terms.vatRateBp)}`
+    : 'No';
+}
 
 export const discountRuleWords: Record<DiscountRule, string> = {
   shared: 'Shared (commission on the price paid)',

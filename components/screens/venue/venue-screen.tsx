@@ -12,14 +12,16 @@ import { Heading, Text } from '@/components/ui/text';
 import { TextLink } from '@/components/ui/text-link';
 import { palette, spacing } from '@/constants/theme';
 import { useVenueQuery } from '@/hooks/queries/venues';
+import { useActiveRole } from '@/hooks/session';
 import { formatMoney } from '@/shared/money/format';
 import { type VenueDetail } from '@/shared/schemas/venue';
 
 import {
-  commissionVatWords,
+  commissionVatText,
   discountRuleWords,
   insuranceBasisWords,
   insurerWords,
+  makerVatText,
   paymentFromWords,
   venueKindWords,
   venueRoleWords,
@@ -27,6 +29,8 @@ import {
 
 function VenueBody({ detail }: { detail: VenueDetail }) {
   const { venue, consignments, staff } = detail;
+  // Only the owner sets terms; anyone else edits the details alone.
+  const owner = useActiveRole() === 'owner';
   const terms = venue.defaultTerms;
   const address = [
     venue.addressLine1,
@@ -46,7 +50,11 @@ function VenueBody({ detail }: { detail: VenueDetail }) {
           {venue.name}
         </Heading>
         <Link href={{ pathname: '/venues/[id]/edit', params: { id: String(venue.id) } }} asChild>
-          <Button testID="venue-edit" label="Edit venue and terms" variant="secondary" />
+          <Button
+            testID="venue-edit"
+            label={owner ? 'Edit venue and terms' : 'Edit venue details'}
+            variant="secondary"
+          />
         </Link>
       </View>
       <Card>
@@ -75,9 +83,10 @@ function VenueBody({ detail }: { detail: VenueDetail }) {
             { label: 'The venue', value: venueRoleWords[terms.venueRole] },
             {
               label: 'VAT on commission',
-              value: `${commissionVatWords[terms.commissionVat]} (VAT rate ${percentText(terms.vatRateBp)}%)`,
+              value: commissionVatText(terms),
+              testID: 'venue-commission-vat',
             },
-            { label: 'You are VAT-registered', value: terms.makerVatRegistered ? 'Yes' : 'No' },
+            { label: 'You are VAT-registered', value: makerVatText(terms) },
             { label: 'Discounts', value: discountRuleWords[terms.discountRule] },
             {
               label: 'Insured at',

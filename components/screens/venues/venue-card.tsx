@@ -7,7 +7,7 @@ import { focusRing, useFocusRing } from '@/components/ui/use-focus-ring';
 import { palette, radii, spacing } from '@/constants/theme';
 import { type Venue } from '@/shared/schemas/venue';
 
-import { venueKindWords } from '../venue-form/venue-words';
+import { commissionVatText, venueKindWords } from '../venue-form/venue-words';
 
 function CardPressable({
   venue,
@@ -15,11 +15,12 @@ function CardPressable({
 }: Omit<PressableProps, 'style' | 'children'> & { venue: Venue }) {
   const { focused, focusProps } = useFocusRing();
   const commission = `${percentText(venue.defaultTerms.commissionRateBp)}% commission`;
+  const vat = commissionVatText(venue.defaultTerms);
   return (
     <Pressable
       role="link"
       testID={`venue-card-${venue.id}`}
-      accessibilityLabel={`${venue.name}, ${venueKindWords[venue.kind]}, ${commission}`}
+      accessibilityLabel={`${venue.name}, ${venueKindWords[venue.kind]}, ${commission}, ${vat}`}
       {...focusProps}
       {...props}
       style={({ pressed }) => [styles.card, pressed && styles.pressed, focused && focusRing]}
@@ -30,6 +31,9 @@ function CardPressable({
       <Heading level={3}>{venue.name}</Heading>
       {venue.contactName ? <Text>{venue.contactName}</Text> : null}
       <Text variant="number">{commission}</Text>
+      <Text variant="small" testID={`venue-card-${venue.id}-vat`}>
+        {vat}
+      </Text>
     </Pressable>
   );
 }

@@ -6,7 +6,7 @@ import { Text } from '@/components/ui/text';
 import { TextLink } from '@/components/ui/text-link';
 import { type Venue } from '@/shared/schemas/venue';
 
-import { venueKindWords, venueRoleWords } from '../venue-form/venue-words';
+import { commissionVatText, venueKindWords, venueRoleWords } from '../venue-form/venue-words';
 
 const column = createColumnHelper<DataTableFeatures, Venue>();
 
@@ -51,7 +51,14 @@ export const venueColumns = column.columns([
   column.accessor((venue) => venue.defaultTerms.venueRole, {
     id: 'role',
     header: 'Terms',
-    meta: { width: 190 },
-    cell: ({ getValue }) => <Text variant="small">{venueRoleWords[getValue()]}</Text>,
+    meta: { width: 220 },
+    cell: ({ row, getValue }) => (
+      <>
+        <Text variant="small">{venueRoleWords[getValue()]}</Text>
+        <Text variant="small" testID={`venue-row-${row.original.id}-vat`}>
+          {commissionVatText(row.original.defaultTerms)}
+        </Text>
+      </>
+    ),
   }),
 ]);

@@ -1,4 +1,10 @@
-import { type DefaultValues, type FieldValues, type Path, useForm } from 'react-hook-form';
+import {
+  type DefaultValues,
+  type FieldValues,
+  type Mode,
+  type Path,
+  useForm,
+} from 'react-hook-form';
 
 import { ApiError, errorMessage } from '@/hooks/api-errors';
 
@@ -11,10 +17,13 @@ import { type FormBinding } from './binding';
 export function useSchemaForm<Values extends FieldValues, Body>(
   binding: FormBinding<Values, Body>,
   defaultValues: Values,
+  /** `onChange` says what is wrong with a field as it is typed, not first on submit. */
+  mode: Mode = 'onSubmit',
 ) {
   const form = useForm<Values, unknown, Body>({
     resolver: binding.resolver,
     defaultValues: defaultValues as DefaultValues<Values>,
+    mode,
   });
 
   const submit = (send: (body: Body) => Promise<void>) =>

@@ -3,7 +3,7 @@ import path from 'node:path';
 
 import * as fontkit from 'fontkit';
 
-import { subsetFonts, subsetRanges } from '@/scripts/font-subset';
+import { figures, subsetFonts, subsetRanges } from '@/scripts/font-subset';
 
 const root = path.resolve(__dirname, '../../..');
 
@@ -35,6 +35,12 @@ function charactersInUiSource(): Set<string> {
 }
 
 const digits = '0123456789';
+const textFaces = subsetFonts.filter((font) => font.keep === 'text');
+const figureFaces = subsetFonts.filter((font) => font.keep === 'figures');
+
+/** Closed outlines of a glyph: a plain zero has two (outside, counter); a slash adds more. */
+const contoursOf = (font: fontkit.Font, text: string, features: string[] = []) =>
+  font.layout(text, features).glyphs[0]!.path.commands.filter((c) => c.command === 'moveTo').length;
 
 describe.each(subsetFonts)('the web font $target', ({ source, target }) => {
   const file = path.join(root, target);
@@ -56,10 +62,15 @@ describe.each(subsetFonts)('the web font $target', ({ source, target }) => {
     expect(subset.subfamilyName).toBe(original.subfamilyName);
   });
 
-  it('keeps every digit and the £ and € signs', () => {
-    for (const ch of `${digits}£€`)
+  it('keeps every digit', () => {
+    for (const ch of digits)
       expect([ch, subset.hasGlyphForCodePoint(ch.codePointAt(0)!)]).toEqual([ch, true]);
   });
+});
+
+describe.each(textFaces)('the web text font $target', ({ source, target }) => {
+  const subset = openFont(path.join(root, target));
+  const original = openFont(source);
 
   it('keeps tabular figures: with tnum all ten digits take the width they take in the .ttf', () => {
     expect(subset.availableFeatures).toContain('tnum');
@@ -70,6 +81,11 @@ describe.each(subsetFonts)('the web font $target', ({ source, target }) => {
     expect(tabular).toEqual(widths(original));
     // Without tnum the same font's figures are proportional, so the feature did the work.
     expect(new Set(subset.layout(digits).positions.map((p) => p.xAdvance)).size).toBeGreaterThan(1);
+  });
+
+  it('keeps the £ and € signs', () => {
+    for (const ch of '£€')
+      expect([ch, subset.hasGlyphForCodePoint(ch.codePointAt(0)!)]).toEqual([ch, true]);
   });
 
   it('keeps every character of the kept ranges that the .ttf has', () => {
@@ -91,5 +107,32 @@ describe.each(subsetFonts)('the web font $target', ({ source, target }) => {
         !subset.hasGlyphForCodePoint(ch.codePointAt(0)!),
     );
     expect(missing).toEqual([]);
+  });
+});
+
+describe.each(figureFaces)('the web figures font $target', ({ source, target }) => {
+  const subset = openFont(path.join(root, target));
+  const original = openFont(source);
+
+  it('holds the digits alone, so every other character falls through to the text face', () => {
+    // fontkit lists U+FFFF, the end marker of the character map's last segment.
+    const mapped = subset.characterSet.filter((cp) => cp > 0x20 && cp < 0xffff);
+    expect(mapped.sort((a, b) => a - b)).toEqual([...figures].map((ch) => ch.codePointAt(0)!));
+  });
+
+  it('lines figures up: all ten digits one width, with tnum or without, as in the .ttf', () => {
+    const widths = (font: fontkit.Font, features: string[]) =>
+      font.layout(digits, features).positions.map((p) => p.xAdvance);
+    expect(new Set(widths(subset, ['tnum'])).size).toBe(1);
+    expect(widths(subset, ['tnum'])).toEqual(widths(original, ['tnum']));
+    expect(widths(subset, [])).toEqual(widths(subset, ['tnum']));
+  });
+
+  it('draws a plain zero, proportional and tabular, where the text face slashes it', () => {
+    expect([contoursOf(subset, '0'), contoursOf(subset, '0', ['tnum'])]).toEqual([2, 2]);
+    const atkinson = openFont(
+      path.join(root, textFaces.find((f) => /atkinson/.test(f.target))!.target),
+    );
+    expect(contoursOf(atkinson, '0')).toBeGreaterThan(2);
   });
 });

@@ -28,6 +28,12 @@ describe('termsInWords', () => {
     ]);
   });
 
+  it('names no VAT rate for a venue that charges no VAT and a maker who is not registered', () => {
+    const words = termsInWords(terms({ commissionVat: 'none', vatRateBp: 500 })).join(' ');
+    expect(words).toContain('with no VAT on it');
+    expect(words).not.toMatch(/5%|VAT at/);
+  });
+
   it('says how VAT on commission is charged and who insures where', () => {
     const words = termsInWords(
       terms({
@@ -44,6 +50,8 @@ describe('termsInWords', () => {
     expect(words).toContain(
       'Commission: 50% of the price paid without the maker’s VAT, with VAT at 20% added on top.',
     );
+    // The rate is said where it is used: on the commission and in a registered maker's prices.
+    expect(words).toContain('The maker is VAT-registered: prices include the maker’s VAT at 20%.');
     expect(words).toContain(
       'Insurance: at an agreed value of £250.00, by the maker on the premises and in transit.',
     );
