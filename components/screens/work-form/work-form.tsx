@@ -1,4 +1,4 @@
-import { type ReactNode } from 'react';
+import { type ReactNode, useEffect } from 'react';
 import { useWatch } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 
@@ -50,6 +50,8 @@ type WorkFormProps<Parsed> = {
   photos?: ReactNode;
   /** A problem after saving that is not about a field. */
   afterNotice?: ReactNode;
+  /** Told whenever the fields come to differ from what they started as, or stop differing. */
+  onDirtyChange?: (dirty: boolean) => void;
 };
 
 /** Every field of a work, grouped as a maker thinks of them; used to create and to edit. */
@@ -63,8 +65,11 @@ export function WorkForm<Parsed>({
   busyLabel,
   photos,
   afterNotice,
+  onDirtyChange,
 }: WorkFormProps<Parsed>) {
   const { control, formState, submit } = useSchemaForm(binding, defaultValues);
+  const dirty = formState.isDirty;
+  useEffect(() => onDirtyChange?.(dirty), [dirty, onDirtyChange]);
   const firing = useWatch({ control, name: 'firingTempC' });
   const foodUse = useWatch({ control, name: 'foodUse' });
   const field = { control } as const;
