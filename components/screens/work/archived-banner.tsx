@@ -18,7 +18,9 @@ export function ArchivedBanner({ work, archivedAt }: { work: Work; archivedAt: s
   return (
     <View testID="work-archived" style={styles.banner}>
       <View style={styles.words}>
-        <StateGlyph shape="open-square" color={palette.ochre} />
+        <View style={styles.glyph}>
+          <StateGlyph shape="open-square" color={palette.ochre} />
+        </View>
         <View style={styles.text}>
           <Text variant="bodyStrong">{`Archived on ${formatDate(archivedAt.slice(0, 10))}`}</Text>
           <Text variant="small">
@@ -55,5 +57,7 @@ const styles = StyleSheet.create({
     alignItems: 'flex-start',
   },
   words: { flexDirection: 'row', gap: spacing.md, alignItems: 'flex-start' },
+  // Level with the first line of text.
+  glyph: { paddingTop: 6 },
   text: { flex: 1, gap: spacing.xxs },
 });

@@ -28,7 +28,7 @@ export function WorkActions({ work }: { work: Work }) {
       onSuccess: () =>
         toast({
           testID: 'work-archived-toast',
-          message: `Archived ${name}: kept for the record, out of the works list.`,
+          message: `Archived ${name}.`,
           action: {
             label: 'Undo',
             onPress: () =>

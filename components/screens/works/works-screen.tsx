@@ -125,10 +125,24 @@ export function WorksScreen({ statusParam }: { statusParam?: string }) {
     },
   });
 
+  const fileActions = (
+    <>
+      <Link href="/works/import" asChild>
+        <Button testID="works-import" label="Import CSV" variant="secondary" />
+      </Link>
+      <DownloadLink
+        href={worksExportPath(filters)}
+        fileName="saggar-works.csv"
+        label={filtered ? 'Export these as CSV' : 'Export CSV'}
+        testID="works-export"
+      />
+    </>
+  );
+
   return (
     <Screen testID="works-screen">
-      <View style={styles.header}>
-        <View style={styles.title}>
+      <View style={[styles.header, !wide && styles.headerNarrow]}>
+        <View style={[styles.title, !wide && styles.titleNarrow]}>
           <Heading level={1}>Works</Heading>
           <Text variant="small">Every piece on record, with where it is now.</Text>
         </View>
@@ -136,15 +150,7 @@ export function WorksScreen({ statusParam }: { statusParam?: string }) {
           <Link href="/works/new" asChild>
             <Button testID="works-new" label="New work" />
           </Link>
-          <Link href="/works/import" asChild>
-            <Button testID="works-import" label="Import CSV" variant="secondary" />
-          </Link>
-          <DownloadLink
-            href={worksExportPath(filters)}
-            fileName="saggar-works.csv"
-            label={filtered ? 'Export these as CSV' : 'Export CSV'}
-            testID="works-export"
-          />
+          {wide ? fileActions : null}
         </View>
       </View>
 
@@ -221,13 +227,17 @@ export function WorksScreen({ statusParam }: { statusParam?: string }) {
           />
         </View>
       )}
+      {/* On a phone the rarer file actions wait under the list, so the works come first. */}
+      {wide ? null : <View style={styles.actions}>{fileActions}</View>}
     </Screen>
   );
 }
 
 const styles = StyleSheet.create({
   header: { gap: spacing.md },
+  headerNarrow: { flexDirection: 'row', alignItems: 'flex-start' },
   title: { gap: spacing.xxs },
+  titleNarrow: { flex: 1 },
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
   list: { gap: spacing.lg },
   fold: { flexBasis: '100%', flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },

@@ -79,10 +79,12 @@ export function FormMeasure<Values extends FieldValues, Body>({
   unit,
   ...props
 }: Bound<Values, Body> & { unit: string }) {
+  const bound = useBoundText(props);
   return (
     <TextField
-      {...useBoundText(props)}
-      suffix={unit}
+      {...bound}
+      // Once a unit is typed, the field's own would contradict it; '' keeps the frame in place.
+      suffix={/[a-z]/i.test(bound.value) ? '' : unit}
       tabular
       autoCapitalize="none"
       autoCorrect={false}
