@@ -151,8 +151,10 @@ export function DataTable<TData extends RowData>({
                     {header.isPlaceholder ? null : header.column.getCanSort() ? (
                       <SortButton header={header} title={title} />
                     ) : typeof header.column.columnDef.header === 'string' ? (
-                      // A bare string would be drawn in the browser's default face.
-                      <Text variant="label">{title}</Text>
+                      // In the sortable headings' type, which a bare string would not take.
+                      <View style={styles.heading}>
+                        <Text variant="label">{title}</Text>
+                      </View>
                     ) : (
                       <table.FlexRender header={header} />
                     )}
@@ -221,6 +223,7 @@ const styles = StyleSheet.create({
     borderRadius: radii.sm,
   },
   sortButtonEnd: { justifyContent: 'flex-end' },
+  heading: { minHeight: touchTarget, justifyContent: 'center' },
   pressed: { opacity: 0.7 },
   arrowOn: { color: palette.accent },
   arrowOff: { color: palette.inkMuted },

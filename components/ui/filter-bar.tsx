@@ -15,10 +15,24 @@ export function FilterBar({ children, testID }: { children: ReactNode; testID?: 
   );
 }
 
-/** One slot of a filter bar, growing to share the row. */
-export function FilterSlot({ children, grow = 1 }: { children: ReactNode; grow?: number }) {
+/** One slot of a filter bar, growing to share the row; `basis` is the width it starts from. */
+export function FilterSlot({
+  children,
+  grow = 1,
+  basis,
+}: {
+  children: ReactNode;
+  grow?: number;
+  basis?: number;
+}) {
   return (
-    <View style={[styles.slot, { flexGrow: grow, maxWidth: grow > 1 ? undefined : 320 }]}>
+    <View
+      style={[
+        styles.slot,
+        { flexGrow: grow, maxWidth: grow > 1 ? undefined : 320 },
+        basis !== undefined && { flexBasis: basis },
+      ]}
+    >
       {children}
     </View>
   );

@@ -27,11 +27,11 @@ export function formatDimensions(h: number | null, w: number | null, d: number |
   return parts.length === 0 ? '—' : `${parts.map((v) => v.toLocaleString('en-GB')).join(' × ')} mm`;
 }
 
-/** Grams as kilograms from 1 kg, for reading: "5.2 kg", "850 g". */
+/** Grams as kilograms from 1 kg, for reading, still exact to the gram: "5.2 kg", "1.234 kg", "850 g". */
 export function formatWeight(grams: number | null): string {
   if (grams === null) return '—';
   if (grams < 1000) return `${grams} g`;
-  return `${(grams / 1000).toLocaleString('en-GB', { maximumFractionDigits: 2 })} kg`;
+  return `${(grams / 1000).toLocaleString('en-GB', { maximumFractionDigits: 3 })} kg`;
 }
 
 /** An instant (ISO-8601) as the studio's clock shows it: "2 Nov 2026, 09:15". */

@@ -13,6 +13,7 @@ import { type Me } from '@/shared/schemas/session';
 import { Button } from './button';
 import { Notice } from './notice';
 import { Text } from './text';
+import { ToastProvider } from './toast';
 import { focusRing, useFocusRing } from './use-focus-ring';
 import { webAria } from './web-aria';
 
@@ -148,7 +149,9 @@ export function Shell({ nav, me, membership, children }: ShellProps) {
           {signOutButton}
           {problem}
         </View>
-        <View style={styles.content}>{children}</View>
+        <View style={styles.content}>
+          <ToastProvider>{children}</ToastProvider>
+        </View>
       </View>
     );
   }
@@ -173,7 +176,9 @@ export function Shell({ nav, me, membership, children }: ShellProps) {
         </View>
       </View>
       {problem}
-      <View style={styles.content}>{children}</View>
+      <View style={styles.content}>
+        <ToastProvider>{children}</ToastProvider>
+      </View>
       <View role="navigation" testID="bottom-bar" style={styles.tabBar}>
         {links}
       </View>

@@ -24,10 +24,23 @@ function LinkPressable({ label, ...props }: LinkPressableProps) {
   );
 }
 
-/** An underlined link in running text or a table cell, with a full-size target. */
-export function TextLink({ href, label, testID }: { href: Href; label: string; testID?: string }) {
+/**
+ * An underlined link in running text or a table cell, with a full-size target. `dismissTo` goes
+ * back to the page when it is already open underneath, as "Back to …" should.
+ */
+export function TextLink({
+  href,
+  label,
+  testID,
+  dismissTo,
+}: {
+  href: Href;
+  label: string;
+  testID?: string;
+  dismissTo?: boolean;
+}) {
   return (
-    <Link href={href} asChild>
+    <Link href={href} asChild dismissTo={dismissTo}>
       <LinkPressable label={label} testID={testID} />
     </Link>
   );

@@ -12,6 +12,7 @@ import { type NewWorkRow, type WorkRow, type WorkUpdate } from '../db/schema/wor
 /** A works row as the list and detail queries select it: its place comes from its latest line. */
 export type WorkListRow = Omit<WorkRow, 'studio_id'> & {
   status: WorkStatus;
+  deletable: number;
   placed_consignment_id: number | null;
   placed_reference: string | null;
   placed_state: ConsignmentState | null;
@@ -74,6 +75,7 @@ export function toWork(row: WorkListRow, photos: Photo[]): Work {
           }
         : null,
     photos,
+    deletable: row.deletable === 1,
     archivedAt: row.archived_at,
     createdAt: row.created_at,
     updatedAt: row.updated_at,

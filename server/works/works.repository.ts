@@ -39,6 +39,13 @@ type WorksWithPlace = ReturnType<typeof worksWithPlace>;
 
 const status = statusFromLatestLine(sql.ref('latest.state'), sql.ref('placed.state'));
 
+/**
+ * 1 while nothing on record needs the work (no consignment line, no condition report), so it may
+ * be deleted; 0 once it has a history, which is kept.
+ */
+const deletable = sql<number>`case when latest.id is null and not exists (
+  select 1 from condition_reports where condition_reports.work_id = works.id) then 1 else 0 end`;
+
 /** Statuses sort in the order a work moves through them, not alphabetically. */
 const statusRank = sql<number>`case ${status} ${sql.join(
   workStatuses.map((s, i) => sql`when ${sql.lit(s)} then ${sql.lit(i)}`),
@@ -114,6 +121,7 @@ function selectWork(query: WorksWithPlace) {
     'works.created_at',
     'works.updated_at',
     status.as('status'),
+    deletable.as('deletable'),
     'placed.id as placed_consignment_id',
     'placed.reference as placed_reference',
     'placed.state as placed_state',

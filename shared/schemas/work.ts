@@ -1,5 +1,6 @@
 import { z } from 'zod';
 
+import { parseLengthMm, parseWeightGrams } from '../measurements';
 import { maxStockNumberLength } from '../works/stock-number';
 import { moneySchema, priceSchema } from './money';
 import { lineText, optionalText } from './text';
@@ -39,6 +40,26 @@ function wholeNumber(label: string, min: number, max: number, unit = '', unitNam
     .optional();
 }
 
+/**
+ * A size or weight stored as a whole number, judged by the reader that takes it as typed, so the
+ * form, the import and this schema say the same words about it.
+ */
+function measurement(read: typeof parseWeightGrams) {
+  const refusal = (text: string) => {
+    const result = read(text);
+    return result.ok ? undefined : result.message;
+  };
+  return z
+    .number({ error: () => refusal('') })
+    .superRefine((value, ctx) => {
+      const message = refusal(String(value));
+      // Aborting, as a failed number check does: the object's own checks wait for sound fields.
+      if (message) ctx.addIssue({ code: 'custom', message, continue: false });
+    })
+    .nullable()
+    .optional();
+}
+
 /** The fields a maker enters; only the title and the retail price are required. */
 const workFields = {
   stockNumber: lineText('stock number', maxStockNumberLength)
@@ -53,10 +74,10 @@ const workFields = {
   firingTempC: wholeNumber('firing temperature', 500, 1600, ' °C', 'degrees Celsius'),
   atmosphere: optionalText('atmosphere', 80),
   kiln: optionalText('kiln type', 80),
-  heightMm: wholeNumber('height', 1, 10_000, ' mm', 'millimetres'),
-  widthMm: wholeNumber('width', 1, 10_000, ' mm', 'millimetres'),
-  depthMm: wholeNumber('depth', 1, 10_000, ' mm', 'millimetres'),
-  weightG: wholeNumber('weight', 1, 2_000_000, ' g', 'grams'),
+  heightMm: measurement(parseLengthMm),
+  widthMm: measurement(parseLengthMm),
+  depthMm: measurement(parseLengthMm),
+  weightG: measurement(parseWeightGrams),
   retailPrice: z.strictObject(priceSchema.shape, { error: 'Enter the retail price.' }),
   costPrice: priceSchema.nullable().optional(),
   foodUse: foodUseSchema.optional(),
@@ -134,6 +155,11 @@ export const workSchema = z.object({
     .object({ id: z.number().int(), reference: z.string(), reserved: z.boolean() })
     .nullable(),
   photos: z.array(photoSchema),
+  /**
+   * Never consigned nor condition-checked, so it may be deleted; a work with a history is kept for
+   * the record and can only be archived.
+   */
+  deletable: z.boolean(),
   archivedAt: z.string().nullable(),
   createdAt: z.string(),
   updatedAt: z.string(),

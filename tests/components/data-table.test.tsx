@@ -1,7 +1,7 @@
 import { createColumnHelper, type SortingState, useTable } from '@tanstack/react-table';
 import { act, fireEvent, render, screen } from '@testing-library/react-native';
 import { useState } from 'react';
-import { Dimensions, Text } from 'react-native';
+import { Dimensions, StyleSheet, Text } from 'react-native';
 
 import { DataTable, type DataTableFeatures, dataTableFeatures } from '@/components/ui/data-table';
 
@@ -12,6 +12,7 @@ const pots: Pot[] = [
 ];
 const column = createColumnHelper<DataTableFeatures, Pot>();
 const columns = column.columns([
+  column.display({ id: 'photo', header: 'Photo', enableSorting: false, cell: () => null }),
   column.accessor('title', { header: 'Title', cell: ({ getValue }) => <Text>{getValue()}</Text> }),
   column.accessor('price', {
     header: 'Price',
@@ -84,6 +85,20 @@ describe('DataTable', () => {
     expect(screen.getByTestId('pot-row-1')).toHaveTextContent('Moon jar180000');
     expect(screen.getByTestId('pot-row-2')).toHaveTextContent('Tea bowl9500');
     expect(screen.getByTestId('sort-title')).toHaveTextContent('Title↑');
+  });
+
+  it('writes every column heading in the same type, sortable or not', () => {
+    setWidth(1024);
+    render(<Pots />);
+
+    const typeOf = (text: string) => {
+      const { fontFamily, fontSize, lineHeight, color } = StyleSheet.flatten(
+        screen.getByText(text).props.style,
+      );
+      return { fontFamily, fontSize, lineHeight, color };
+    };
+    expect(typeOf('Photo')).toEqual(typeOf('Title'));
+    expect(typeOf('Photo').fontFamily).toEqual(expect.any(String));
   });
 
   it('asks for the other direction, or another column, when a header is pressed', () => {

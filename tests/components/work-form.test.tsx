@@ -126,7 +126,46 @@ describe('WorkForm', () => {
       'Enter at most 2 decimal places (pounds and pence).',
     );
     expect(screen.getByTestId('work-heightMm-error')).toHaveTextContent(
-      'Enter the height as a whole number of millimetres.',
+      'Enter the size to the nearest millimetre, such as 142 mm or 14.2 cm.',
+    );
+    expect(fetchMock).not.toHaveBeenCalled();
+  });
+
+  it('reads sizes and weights typed with their units into millimetres and grams', async () => {
+    const fetchMock = mockFetch({ status: 400, body: { error: { code: 'x', message: 'No.' } } });
+    renderForm();
+
+    fill('work-title', 'Tall jug');
+    fill('work-retailPrice', '85');
+    fill('work-heightMm', '14 cm');
+    fill('work-widthMm', '95 mm');
+    fill('work-depthMm', '90');
+    fill('work-weightG', '1.2 kg');
+    fireEvent.press(screen.getByTestId('work-submit'));
+
+    await screen.findByTestId('work-form-error');
+    const body = JSON.parse((fetchMock.mock.calls[0] as [string, RequestInit])[1].body as string);
+    expect(body).toMatchObject({ heightMm: 140, widthMm: 95, depthMm: 90, weightG: 1200 });
+  });
+
+  it('says what a weight needs in the same words the server uses', async () => {
+    const fetchMock = mockFetch();
+    renderForm();
+
+    fill('work-title', 'Tall jug');
+    fill('work-retailPrice', '85');
+    fill('work-weightG', '3 lb');
+    fireEvent.press(screen.getByTestId('work-submit'));
+    expect(await screen.findByTestId('work-weightG-error')).toHaveTextContent(
+      'Enter the weight in grams or kilograms, such as 850 g or 1.2 kg.',
+    );
+
+    fill('work-weightG', '0 kg');
+    fireEvent.press(screen.getByTestId('work-submit'));
+    await waitFor(() =>
+      expect(screen.getByTestId('work-weightG-error')).toHaveTextContent(
+        'The weight must be at least 1 g.',
+      ),
     );
     expect(fetchMock).not.toHaveBeenCalled();
   });

@@ -4,12 +4,14 @@ import { StyleSheet, View } from 'react-native';
 
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
+import { useLeaveGuard } from '@/components/ui/form/use-leave-guard';
 import { Notice } from '@/components/ui/notice';
 import { pickPhotos } from '@/components/ui/photo-picker';
 import { PhotoStrip } from '@/components/ui/photo-strip';
 import { Screen } from '@/components/ui/screen';
 import { ErrorView, LoadingView } from '@/components/ui/status-views';
 import { Heading, Text } from '@/components/ui/text';
+import { useToast } from '@/components/ui/toast';
 import { spacing } from '@/constants/theme';
 import { errorMessage } from '@/hooks/api-errors';
 import { useStudioQuery } from '@/hooks/queries/studio';
@@ -28,9 +30,15 @@ export function WorkCreateScreen() {
   const photos = usePendingPhotos();
   const [progress, setProgress] = useState<number | null>(null);
   const [unsent, setUnsent] = useState<{ work: Work; reason: string } | null>(null);
+  const [dirty, setDirty] = useState(false);
+  const guard = useLeaveGuard(dirty || photos.files.length > 0);
+  const toast = useToast();
 
   const open = (work: Work) =>
-    router.replace({ pathname: '/works/[id]', params: { id: String(work.id) } });
+    guard.leave(() => {
+      router.replace({ pathname: '/works/[id]', params: { id: String(work.id) } });
+      toast({ message: `Saved ‘${work.title}’ as ${work.stockNumber}.` });
+    });
 
   const [photoProblem, setPhotoProblem] = useState<string | null>(null);
   const addPhotos = async () => {
@@ -57,6 +65,7 @@ export function WorkCreateScreen() {
       ) : (
         <WorkForm
           mode="create"
+          onDirtyChange={setDirty}
           defaultValues={emptyWorkValues(studio.data.nextStockNumber)}
           binding={workBinding('create', studio.data.currency)}
           currency={studio.data.currency}
@@ -112,6 +121,7 @@ export function WorkCreateScreen() {
           }
         />
       )}
+      {guard.prompt}
     </Screen>
   );
 }

@@ -1,11 +1,14 @@
 import { useRouter } from 'expo-router';
+import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { Card } from '@/components/ui/card';
+import { useLeaveGuard } from '@/components/ui/form/use-leave-guard';
 import { Screen } from '@/components/ui/screen';
 import { ErrorView, LoadingView } from '@/components/ui/status-views';
 import { Heading, Text } from '@/components/ui/text';
 import { TextLink } from '@/components/ui/text-link';
+import { useToast } from '@/components/ui/toast';
 import { spacing } from '@/constants/theme';
 import { useWorkQuery, useWorkUpdateMutation } from '@/hooks/queries/works';
 
@@ -17,6 +20,9 @@ export function WorkEditScreen({ id }: { id: number }) {
   const router = useRouter();
   const work = useWorkQuery(id);
   const update = useWorkUpdateMutation(id);
+  const toast = useToast();
+  const [dirty, setDirty] = useState(false);
+  const guard = useLeaveGuard(dirty);
   const back = { pathname: '/works/[id]', params: { id: String(id) } } as const;
 
   return (
@@ -28,7 +34,7 @@ export function WorkEditScreen({ id }: { id: number }) {
       ) : (
         <>
           <View style={styles.heading}>
-            <TextLink href={back} label={`Back to ${work.data.title}`} />
+            <TextLink href={back} label={`Back to ${work.data.title}`} dismissTo />
             <Heading level={1}>Edit {work.data.stockNumber}</Heading>
             <Text variant="small">
               Changes are saved when you press Save changes; photos save as you go.
@@ -45,11 +51,16 @@ export function WorkEditScreen({ id }: { id: number }) {
             currency={work.data.retailPrice.currency}
             submitLabel="Save changes"
             busyLabel="Saving…"
+            onDirtyChange={setDirty}
             onSubmit={async (values) => {
-              await update.mutateAsync(values);
-              router.replace(back);
+              const saved = await update.mutateAsync(values);
+              guard.leave(() => {
+                router.dismissTo(back);
+                toast({ testID: 'work-saved', message: `Saved ‘${saved.title}’.` });
+              });
             }}
           />
+          {guard.prompt}
         </>
       )}
     </Screen>

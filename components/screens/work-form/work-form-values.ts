@@ -1,6 +1,13 @@
 import { moneyText, numberText } from '@/components/ui/decimal-text';
 import { bindForm, type FieldBindings, type FormBinding } from '@/components/ui/form/binding';
-import { choiceCodec, moneyCodec, numberCodec, textCodec } from '@/components/ui/form/codecs';
+import {
+  choiceCodec,
+  lengthCodec,
+  moneyCodec,
+  numberCodec,
+  textCodec,
+  weightCodec,
+} from '@/components/ui/form/codecs';
 import {
   type FoodUse,
   type Work,
@@ -109,10 +116,10 @@ export function workBinding(mode: 'create' | 'update', currency: string) {
     firingTempC: { read: numberCodec },
     atmosphere: { read: textCodec },
     kiln: { read: textCodec },
-    heightMm: { read: numberCodec },
-    widthMm: { read: numberCodec },
-    depthMm: { read: numberCodec },
-    weightG: { read: numberCodec },
+    heightMm: { read: lengthCodec },
+    widthMm: { read: lengthCodec },
+    depthMm: { read: lengthCodec },
+    weightG: { read: weightCodec },
     retailPrice: { read: money, blank: { required: 'Enter the retail price.' } },
     costPrice: { read: money },
     foodUse: { read: choiceCodec },

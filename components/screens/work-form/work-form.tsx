@@ -1,11 +1,17 @@
-import { type ReactNode } from 'react';
+import { type ReactNode, useEffect } from 'react';
 import { useWatch } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 
 import { Card } from '@/components/ui/card';
 import { FieldCell, FieldRow } from '@/components/ui/field-row';
 import { type FormBinding } from '@/components/ui/form/binding';
-import { FormChoice, FormMoney, FormNumber, FormText } from '@/components/ui/form/fields';
+import {
+  FormChoice,
+  FormMeasure,
+  FormMoney,
+  FormNumber,
+  FormText,
+} from '@/components/ui/form/fields';
 import { useSchemaForm } from '@/components/ui/form/use-schema-form';
 import { FormFooter } from '@/components/ui/form-footer';
 import { Heading, Text } from '@/components/ui/text';
@@ -44,6 +50,8 @@ type WorkFormProps<Parsed> = {
   photos?: ReactNode;
   /** A problem after saving that is not about a field. */
   afterNotice?: ReactNode;
+  /** Told whenever the fields come to differ from what they started as, or stop differing. */
+  onDirtyChange?: (dirty: boolean) => void;
 };
 
 /** Every field of a work, grouped as a maker thinks of them; used to create and to edit. */
@@ -57,8 +65,11 @@ export function WorkForm<Parsed>({
   busyLabel,
   photos,
   afterNotice,
+  onDirtyChange,
 }: WorkFormProps<Parsed>) {
   const { control, formState, submit } = useSchemaForm(binding, defaultValues);
+  const dirty = formState.isDirty;
+  useEffect(() => onDirtyChange?.(dirty), [dirty, onDirtyChange]);
   const firing = useWatch({ control, name: 'firingTempC' });
   const foodUse = useWatch({ control, name: 'foodUse' });
   const field = { control } as const;
@@ -139,9 +150,12 @@ export function WorkForm<Parsed>({
       </Section>
 
       <Section title="Size and weight">
+        <Text variant="small">
+          Type the unit you measured in, such as 14 cm or 1.2 kg; a number alone is in mm or g.
+        </Text>
         <FieldRow>
           <FieldCell basis={140}>
-            <FormNumber
+            <FormMeasure
               {...field}
               name="heightMm"
               testID="work-heightMm"
@@ -150,13 +164,13 @@ export function WorkForm<Parsed>({
             />
           </FieldCell>
           <FieldCell basis={140}>
-            <FormNumber {...field} name="widthMm" testID="work-widthMm" label="Width" unit="mm" />
+            <FormMeasure {...field} name="widthMm" testID="work-widthMm" label="Width" unit="mm" />
           </FieldCell>
           <FieldCell basis={140}>
-            <FormNumber {...field} name="depthMm" testID="work-depthMm" label="Depth" unit="mm" />
+            <FormMeasure {...field} name="depthMm" testID="work-depthMm" label="Depth" unit="mm" />
           </FieldCell>
           <FieldCell basis={140}>
-            <FormNumber {...field} name="weightG" testID="work-weightG" label="Weight" unit="g" />
+            <FormMeasure {...field} name="weightG" testID="work-weightG" label="Weight" unit="g" />
           </FieldCell>
         </FieldRow>
       </Section>

@@ -17,6 +17,7 @@ import { formatMoney } from '@/shared/money/format';
 import { heavyWeightG, type Work } from '@/shared/schemas/work';
 import { foodSafeNote, foodUseWords } from '@/shared/works/food-use';
 
+import { ArchivedBanner } from './archived-banner';
 import { WorkActions } from './work-actions';
 import { WorkHistory } from './work-history';
 import { WorkPhotos } from './work-photos';
@@ -70,17 +71,8 @@ function WorkBody({ work }: { work: Work }) {
       value: formatDimensions(work.heightMm, work.widthMm, work.depthMm),
       numeric: true,
     },
-    {
-      label: 'Weight',
-      value: work.weightG === null ? '—' : `${work.weightG.toLocaleString('en-GB')} g`,
-      numeric: true,
-    },
-    {
-      label: 'Retail price',
-      value: formatMoney(work.retailPrice),
-      numeric: true,
-      testID: 'work-price',
-    },
+    { label: 'Weight', value: formatWeight(work.weightG), numeric: true, testID: 'work-weight' },
+    { label: 'Retail price', value: formatMoney(work.retailPrice), numeric: true },
     { label: 'Cost', value: work.costPrice ? formatMoney(work.costPrice) : '—', numeric: true },
     { label: 'Food use', value: foodUseWords[work.foodUse] },
     { label: 'Care', value: work.careNotes ?? '—' },
@@ -99,9 +91,13 @@ function WorkBody({ work }: { work: Work }) {
         <View style={styles.where}>
           <StateMark look={workStatusLooks[work.status]} testID="work-status" />
           {work.venue ? <Text variant="small">{`at ${work.venue.name}`}</Text> : null}
-          {work.archivedAt ? <Text variant="label">Archived</Text> : null}
         </View>
+        {/* Above the photographs, so a phone shows it without scrolling. */}
+        <Text variant="heading" style={styles.tabular} testID="work-price">
+          {formatMoney(work.retailPrice)}
+        </Text>
       </View>
+      {work.archivedAt ? <ArchivedBanner work={work} archivedAt={work.archivedAt} /> : null}
       <WorkPhotos work={work} />
       <WorkActions work={work} />
       <WorkCautions work={work} />

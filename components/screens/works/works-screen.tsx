@@ -1,5 +1,5 @@
 import { type SortingState, type Updater, useTable } from '@tanstack/react-table';
-import { Link } from 'expo-router';
+import { Link, useRouter } from 'expo-router';
 import { useEffect, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
@@ -9,11 +9,9 @@ import { DownloadLink } from '@/components/ui/download-link';
 import { FilterBar, FilterSlot } from '@/components/ui/filter-bar';
 import { Pager } from '@/components/ui/pager';
 import { Screen } from '@/components/ui/screen';
-import { Select } from '@/components/ui/select';
 import { EmptyView, ErrorView, LoadingView } from '@/components/ui/status-views';
 import { Heading, Text } from '@/components/ui/text';
 import { TextField } from '@/components/ui/text-field';
-import { workStatusLooks } from '@/constants/states';
 import { spacing } from '@/constants/theme';
 import { useWorkFacetsQuery, useWorksQuery, worksExportPath } from '@/hooks/queries/works';
 import { useBreakpoint } from '@/hooks/use-breakpoint';
@@ -22,33 +20,20 @@ import {
   type WorkListQuery,
   type WorkSort,
   workSortSchema,
-  type WorkStatus,
-  workStatuses,
   workStatusSchema,
 } from '@/shared/schemas/work';
 
 import { WorkCard } from './work-card';
 import { workColumns } from './work-columns';
+import {
+  activeFilterCount,
+  noWorkFilters,
+  type WorkFilterValues,
+  WorksFilters,
+} from './works-filters';
 
 const pageSize = 25;
 const noWorks: Work[] = [];
-const statusOptions = workStatuses.map((s) => ({ value: s, label: workStatusLooks[s].word }));
-const sortOptions: { value: WorkSort; label: string }[] = [
-  { value: 'stockNumber', label: 'Stock number' },
-  { value: '-stockNumber', label: 'Stock number, newest first' },
-  { value: 'title', label: 'Title, A to Z' },
-  { value: '-title', label: 'Title, Z to A' },
-  { value: '-year', label: 'Year, newest first' },
-  { value: 'year', label: 'Year, oldest first' },
-  { value: 'price', label: 'Price, lowest first' },
-  { value: '-price', label: 'Price, highest first' },
-  { value: 'status', label: 'Status' },
-];
-const archivedOptions = [
-  { value: 'include', label: 'Current and archived' },
-  { value: 'only', label: 'Archived only' },
-];
-
 /** The server's sort name as react-table's sorting state, and back. */
 function toSorting(sort: WorkSort): SortingState {
   const desc = sort.startsWith('-');
@@ -71,18 +56,32 @@ function useDebounced(value: string, ms = 300): string {
   return settled;
 }
 
-export function WorksScreen() {
+/**
+ * Every work, searched, filtered and paged by the server. The status filter lives in the address
+ * (`?status=sold`), so a count elsewhere can open the list narrowed to it.
+ */
+export function WorksScreen({ statusParam }: { statusParam?: string }) {
   const { wide } = useBreakpoint();
+  const router = useRouter();
   const [searchText, setSearchText] = useState('');
   const search = useDebounced(searchText.trim());
-  const [status, setStatus] = useState<WorkStatus | ''>('');
-  const [series, setSeries] = useState('');
-  const [category, setCategory] = useState('');
-  const [venueId, setVenueId] = useState('');
-  const [archived, setArchived] = useState<'exclude' | 'include' | 'only'>('exclude');
-  const [sort, setSort] = useState<WorkSort>('stockNumber');
+  const [chosen, setChosen] = useState<Omit<WorkFilterValues, 'status'>>({
+    ...noWorkFilters,
+    sort: 'stockNumber',
+  });
+  const values: WorkFilterValues = {
+    ...chosen,
+    status: workStatusSchema.safeParse(statusParam).data ?? '',
+  };
+  const change = ({ status, ...rest }: Partial<WorkFilterValues>) => {
+    if (status !== undefined) router.setParams({ status: status || undefined });
+    setChosen((before) => ({ ...before, ...rest }));
+  };
+  const activeCount = activeFilterCount(values);
+  const [showFilters, setShowFilters] = useState(false);
+  const { status, series, category, venueId, archived, sort } = values;
   // A page belongs to one search, filter and sort: change any of them and it is page 1 again.
-  const filterKey = JSON.stringify([search, status, series, category, venueId, archived, sort]);
+  const filterKey = JSON.stringify([search, values]);
   const [paging, setPaging] = useState({ key: filterKey, page: 1 });
   const page = paging.key === filterKey ? paging.page : 1;
   const setPage = (next: number) => setPaging({ key: filterKey, page: next });
@@ -98,9 +97,7 @@ export function WorksScreen() {
     page,
     pageSize,
   };
-  const filtered = Boolean(
-    search || status || series || category || venueId || archived !== 'exclude',
-  );
+  const filtered = Boolean(search) || activeCount > 0;
 
   const works = useWorksQuery(filters);
   // Archiving the last work of the last page leaves that page empty: step back to the last one.
@@ -124,14 +121,28 @@ export function WorksScreen() {
     state: { sorting, pagination: { pageIndex: page - 1, pageSize } },
     onSortingChange: (updater: Updater<SortingState>) => {
       const next = typeof updater === 'function' ? updater(sorting) : updater;
-      setSort(fromSorting(next));
+      change({ sort: fromSorting(next) });
     },
   });
 
+  const fileActions = (
+    <>
+      <Link href="/works/import" asChild>
+        <Button testID="works-import" label="Import CSV" variant="secondary" />
+      </Link>
+      <DownloadLink
+        href={worksExportPath(filters)}
+        fileName="saggar-works.csv"
+        label={filtered ? 'Export these as CSV' : 'Export CSV'}
+        testID="works-export"
+      />
+    </>
+  );
+
   return (
     <Screen testID="works-screen">
-      <View style={styles.header}>
-        <View style={styles.title}>
+      <View style={[styles.header, !wide && styles.headerNarrow]}>
+        <View style={[styles.title, !wide && styles.titleNarrow]}>
           <Heading level={1}>Works</Heading>
           <Text variant="small">Every piece on record, with where it is now.</Text>
         </View>
@@ -139,20 +150,12 @@ export function WorksScreen() {
           <Link href="/works/new" asChild>
             <Button testID="works-new" label="New work" />
           </Link>
-          <Link href="/works/import" asChild>
-            <Button testID="works-import" label="Import CSV" variant="secondary" />
-          </Link>
-          <DownloadLink
-            href={worksExportPath(filters)}
-            fileName="saggar-works.csv"
-            label={filtered ? 'Export these as CSV' : 'Export CSV'}
-            testID="works-export"
-          />
+          {wide ? fileActions : null}
         </View>
       </View>
 
       <FilterBar testID="works-filters">
-        <FilterSlot grow={2}>
+        <FilterSlot grow={2} basis={260}>
           <TextField
             testID="works-search"
             label="Search"
@@ -163,70 +166,29 @@ export function WorksScreen() {
             inputMode="search"
           />
         </FilterSlot>
-        <FilterSlot>
-          <Select
-            testID="works-filter-status"
-            label="Status"
-            emptyLabel="Any status"
-            options={statusOptions}
-            value={status}
-            onChange={(v) => setStatus(workStatusSchema.safeParse(v).data ?? '')}
-          />
-        </FilterSlot>
-        <FilterSlot>
-          <Select
-            testID="works-filter-series"
-            label="Series"
-            emptyLabel="Any series"
-            options={(facets.data?.series ?? []).map((s) => ({ value: s, label: s }))}
-            value={series}
-            onChange={setSeries}
-          />
-        </FilterSlot>
-        <FilterSlot>
-          <Select
-            testID="works-filter-category"
-            label="Category"
-            emptyLabel="Any category"
-            options={(facets.data?.categories ?? []).map((c) => ({ value: c, label: c }))}
-            value={category}
-            onChange={setCategory}
-          />
-        </FilterSlot>
-        <FilterSlot>
-          <Select
-            testID="works-filter-venue"
-            label="At venue"
-            emptyLabel="Anywhere"
-            options={(facets.data?.venues ?? []).map((v) => ({
-              value: String(v.id),
-              label: v.name,
-            }))}
-            value={venueId}
-            onChange={setVenueId}
-          />
-        </FilterSlot>
-        <FilterSlot>
-          <Select
-            testID="works-filter-archived"
-            label="Archived"
-            emptyLabel="Current only"
-            options={archivedOptions}
-            value={archived === 'exclude' ? '' : archived}
-            onChange={(v) => setArchived(v === 'include' || v === 'only' ? v : 'exclude')}
-          />
-        </FilterSlot>
         {wide ? null : (
-          <FilterSlot>
-            <Select
-              testID="works-sort"
-              label="Sort by"
-              options={sortOptions}
-              value={sort}
-              onChange={(v) => setSort(workSortSchema.safeParse(v).data ?? 'stockNumber')}
+          // On a phone the works come first: the filters fold behind one button that counts them.
+          <View style={styles.fold}>
+            <Button
+              testID="works-filters-toggle"
+              label={activeCount > 0 ? `Filters (${activeCount})` : 'Filters'}
+              variant="secondary"
+              aria-expanded={showFilters}
+              onPress={() => setShowFilters((shown) => !shown)}
             />
-          </FilterSlot>
+            {activeCount > 0 ? (
+              <Button
+                testID="works-filters-clear"
+                label="Clear filters"
+                variant="quiet"
+                onPress={() => change(noWorkFilters)}
+              />
+            ) : null}
+          </View>
         )}
+        {wide || showFilters ? (
+          <WorksFilters values={values} onChange={change} facets={facets.data} withSort={!wide} />
+        ) : null}
       </FilterBar>
 
       {works.isPending ? (
@@ -265,13 +227,18 @@ export function WorksScreen() {
           />
         </View>
       )}
+      {/* On a phone the rarer file actions wait under the list, so the works come first. */}
+      {wide ? null : <View style={styles.actions}>{fileActions}</View>}
     </Screen>
   );
 }
 
 const styles = StyleSheet.create({
   header: { gap: spacing.md },
+  headerNarrow: { flexDirection: 'row', alignItems: 'flex-start' },
   title: { gap: spacing.xxs },
+  titleNarrow: { flex: 1 },
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
   list: { gap: spacing.lg },
+  fold: { flexBasis: '100%', flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
 });

@@ -1,3 +1,4 @@
+import { parseLengthMm, parseWeightGrams } from '@/shared/measurements';
 import { minorUnitOf, type Money } from '@/shared/schemas/money';
 
 import { type Parsed, parseMoneyText, parsePercentText, wholeNumberValue } from '../decimal-text';
@@ -22,6 +23,21 @@ export const numberCodec: Codec<string, number> = (text) => {
   const value = wholeNumberValue(text);
   return value === null ? { kind: 'empty' } : ok(value);
 };
+
+/** A reader of a measurement as typed, as a codec: blank is empty, the reader's words otherwise. */
+function measurementCodec(read: typeof parseWeightGrams): Codec<string, number> {
+  return (text) => {
+    if (text.trim() === '') return { kind: 'empty' };
+    const result = read(text);
+    return result.ok ? ok(result.value) : { kind: 'invalid', message: result.message };
+  };
+}
+
+/** A weight as people say it ("1.2 kg", "850 g"; a bare number is grams), in whole grams. */
+export const weightCodec = measurementCodec(parseWeightGrams);
+
+/** A height, width or depth as people say it ("14 cm", "140 mm"; bare is mm), in whole mm. */
+export const lengthCodec = measurementCodec(parseLengthMm);
 
 /** An amount typed in major units ("45.50", "£1,250"), read exactly into minor units. */
 export function moneyCodec(currency: string): Codec<string, Money> {

@@ -71,6 +71,27 @@ export function FormNumber<Values extends FieldValues, Body>({
   return <NumberField {...useBoundText(props)} unit={unit} decimal={decimal} />;
 }
 
+/**
+ * A size or weight, which may be typed with its unit ("1.2 kg"): a text keyboard, and the field's
+ * own unit beside it for a bare number.
+ */
+export function FormMeasure<Values extends FieldValues, Body>({
+  unit,
+  ...props
+}: Bound<Values, Body> & { unit: string }) {
+  const bound = useBoundText(props);
+  return (
+    <TextField
+      {...bound}
+      // Once a unit is typed, the field's own would contradict it; '' keeps the frame in place.
+      suffix={/[a-z]/i.test(bound.value) ? '' : unit}
+      tabular
+      autoCapitalize="none"
+      autoCorrect={false}
+    />
+  );
+}
+
 /** A calendar date. */
 export function FormDate<Values extends FieldValues, Body>(props: Bound<Values, Body>) {
   const { label, testID, hint, value, onChangeText, onBlur, error } = useBoundText(props);

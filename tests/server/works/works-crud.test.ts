@@ -47,6 +47,7 @@ describe('POST /api/works', () => {
       status: 'in-studio',
       venue: null,
       photos: [],
+      deletable: true,
       archivedAt: null,
       glaze: null,
     });
@@ -107,7 +108,10 @@ describe('POST /api/works', () => {
         issues: [
           { path: ['title'], message: 'Enter a title.' },
           { path: ['year'], message: 'The year must be at least 1900.' },
-          { path: ['weightG'], message: 'Enter the weight as a whole number of grams.' },
+          {
+            path: ['weightG'],
+            message: 'Enter the weight to the nearest gram, such as 850 g or 1.25 kg.',
+          },
           { path: ['retailPrice', 'amount'], message: 'A price cannot be below zero.' },
           { path: [], message: expect.stringContaining('glazeColour') },
         ],
@@ -138,6 +142,39 @@ describe('GET /api/works/:id', () => {
       .set(await as(f, 'assistant'));
     expect(res.status).toBe(200);
     expect(res.body).toEqual(created.body);
+  });
+
+  it('says it may be deleted only until it is consigned or condition-checked', async () => {
+    const f = await studioFixture();
+    const fresh = await insertWork(f.db, f.studioA, 'A-1');
+    const consigned = await insertWork(f.db, f.studioA, 'A-2');
+    const checked = await insertWork(f.db, f.studioA, 'A-3');
+    const show = await addConsignment(f.db, f.studioA, f.venueA, 'S-1');
+    // A line later withdrawn still leaves the work on the record.
+    await insertLine(f.db, f.studioA, show, consigned, 'withdrawn');
+    await f.db
+      .insertInto('condition_reports')
+      .values({
+        studio_id: f.studioA,
+        work_id: checked,
+        stage: 'dispatch',
+        examiner_name: 'Ann',
+        examined_on: '2026-09-30',
+      })
+      .execute();
+    const deletable = async (id: number) =>
+      (
+        await request(f.app)
+          .get(`/api/works/${id}`)
+          .set(await as(f))
+      ).body.deletable;
+    expect(await deletable(fresh)).toBe(true);
+    expect(await deletable(consigned)).toBe(false);
+    expect(await deletable(checked)).toBe(false);
+    const refused = await request(f.app)
+      .delete(`/api/works/${checked}`)
+      .set(await as(f));
+    expect(refused.status).toBe(409);
   });
 
   it('answers 404 for another studio’s work and 400 for an id that is not a number', async () => {
@@ -277,7 +314,7 @@ describe('PATCH /api/works/:id', () => {
       .send({ heightMm: 0, foodUse: 'maybe' });
     expect(bad.status).toBe(400);
     expect(bad.body.error.issues).toEqual([
-      { path: ['heightMm'], message: 'The height must be at least 1 mm.' },
+      { path: ['heightMm'], message: 'The size must be at least 1 mm.' },
       { path: ['foodUse'], message: 'Choose food-safe, decorative only, or not stated.' },
     ]);
     const other = await request(f.app)

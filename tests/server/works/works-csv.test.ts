@@ -216,7 +216,10 @@ describe('POST /api/works/import', () => {
           stockNumber: 'P-4',
           title: 'Jug',
           errors: [
-            { field: 'weightG', message: 'Enter the weight as a whole number of grams.' },
+            {
+              field: 'weightG',
+              message: 'Enter the weight to the nearest gram, such as 850 g or 1.25 kg.',
+            },
             { field: 'foodUse', message: 'Choose food-safe, decorative only, or not stated.' },
           ],
         },
@@ -258,7 +261,7 @@ describe('POST /api/works/import', () => {
         { field: 'year', message: 'The year must be at least 1900.', rowNumbers: [4] },
         {
           field: 'weightG',
-          message: 'Enter the weight as a whole number of grams.',
+          message: 'Enter the weight to the nearest gram, such as 850 g or 1.25 kg.',
           rowNumbers: [5],
         },
         {
