@@ -73,20 +73,20 @@ export function importColumnLabel(column: string): string {
 export const requiredImportFields: readonly ImportField[] = ['title', 'retailPrice'];
 
 /**
- * Other headers makers commonly use for a column, besides its name and label; matched ignoring
- * case, spaces and punctuation ("Stock No." is `stockno`).
+ * Other headers makers commonly use for a column, besides its label and name; matched ignoring
+ * case, spaces and punctuation, so "STOCK NO" is "Stock no.".
  */
 export const importColumnAliases: Readonly<Partial<Record<ImportColumn, readonly string[]>>> = {
-  stockNumber: ['stock', 'stockno', 'ref', 'reference', 'sku'],
-  retailPrice: ['price', 'retail'],
-  costPrice: ['cost'],
-  firingTempC: ['firingtemperature', 'firing', 'temperature'],
-  clayBody: ['clay'],
-  weightG: ['weight'],
-  heightMm: ['height'],
-  widthMm: ['width'],
-  depthMm: ['depth'],
-  currency: ['currencycode', 'ccy'],
+  stockNumber: ['Stock', 'Stock no.', 'Ref', 'Reference', 'SKU'],
+  retailPrice: ['Price', 'Retail'],
+  costPrice: ['Cost'],
+  firingTempC: ['Firing temperature', 'Firing', 'Temperature'],
+  clayBody: ['Clay'],
+  weightG: ['Weight'],
+  heightMm: ['Height'],
+  widthMm: ['Width'],
+  depthMm: ['Depth'],
+  currency: ['Currency code', 'CCY'],
 };
 
 /** 2 MB of CSV is several thousand works; more than that is better split. */
