@@ -47,6 +47,8 @@ describe('importing works at phone size', () => {
     );
     await expect(text(page, 'import-column-weightG')).resolves.toContain('1.2 kg');
     await screenshot(page, 'import-before-phone');
+    await page.getByTestId('import-column-weightG').scrollIntoViewIfNeeded();
+    await screenshot(page, 'import-columns-phone');
     await expectAccessible(page);
     const [template] = await Promise.all([
       page.waitForEvent('download'),
@@ -81,6 +83,8 @@ describe('importing works at phone size', () => {
     );
     await expect(text(page, 'import-duplicates-same-in-file')).resolves.toContain('Row 7');
     await screenshot(page, 'import-preview-phone');
+    await page.getByTestId('import-row-2').scrollIntoViewIfNeeded();
+    await screenshot(page, 'import-preview-rows-phone');
     await expectAccessible(page);
 
     // The import: the skipped rows stay, with why.
@@ -153,6 +157,7 @@ describe('importing works on a wide screen', () => {
     await expect(text(page, 'import-row-read-2')).resolves.toBe(
       'Reads as £1,250.00 GBP · 30 × 420 × 420 mm · 3.1 kg',
     );
+    await page.getByTestId('import-row-2').scrollIntoViewIfNeeded();
     await screenshot(page, 'import-preview-wide');
     await page.getByTestId('import-commit').click();
     await page.getByTestId('import-done').waitFor();

@@ -20,6 +20,7 @@ import {
   importColumnLabels,
   importColumns,
   maxImportRows,
+  overridableDuplicates,
 } from '@/shared/schemas/work-import';
 
 import { ImportColumnsGuide } from './import-columns-guide';
@@ -84,7 +85,9 @@ export function WorkImportScreen() {
     : 0;
 
   return (
-    <Screen testID="work-import-screen">
+    // A scroll view of its own for the result, so that it opens at its top rather than where the
+    // Import button was.
+    <Screen testID="work-import-screen" key={commit.isSuccess ? 'result' : 'check'}>
       <View style={styles.heading}>
         <TextLink href="/works" label="All works" />
         <Heading level={1}>Import works from CSV</Heading>
@@ -136,10 +139,16 @@ export function WorkImportScreen() {
             {data.importableDuplicateCount > 0 ? (
               <TickBox
                 testID="import-duplicates-anyway"
-                label={`Import them anyway as new works: the ${counted(data.importableDuplicateCount, 'row')} with the same title, year and price as a work in the catalogue or an earlier row. Rows whose stock number is taken are never imported.`}
+                label={`Import them anyway as new works (${counted(data.importableDuplicateCount, 'row')} with the same title, year and price as a work in the catalogue or an earlier row)`}
                 ticked={importDuplicates}
                 onToggle={() => setImportDuplicates((d) => !d)}
               />
+            ) : null}
+            {data.duplicates.some((d) => !overridableDuplicates.has(d.kind)) ? (
+              <Text variant="small" testID="import-taken-note">
+                Rows whose stock number is already used are never imported: stock numbers are
+                unique.
+              </Text>
             ) : null}
           </Card>
 
