@@ -16,17 +16,22 @@ import { rowNumbersText } from './row-numbers';
 type ImportGroupsProps = {
   problems: readonly ImportProblem[];
   duplicates: readonly ImportDuplicateGroup[];
+  title?: string;
 };
 
 /**
  * Every problem and every kind of duplicate once, with all the rows it concerns: however long the
  * file, this says all of it in a few lines.
  */
-export function ImportGroups({ problems, duplicates }: ImportGroupsProps) {
+export function ImportGroups({
+  problems,
+  duplicates,
+  title = 'Rows that will not be imported',
+}: ImportGroupsProps) {
   if (problems.length === 0 && duplicates.length === 0) return null;
   return (
     <Card style={styles.card} testID="import-groups">
-      <Heading level={2}>Rows that will not be imported</Heading>
+      <Heading level={2}>{title}</Heading>
       <View role="list" style={styles.list}>
         {problems.map((problem) => (
           <View

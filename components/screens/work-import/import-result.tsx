@@ -47,7 +47,11 @@ export function ImportResult({ result, fileName, onAnother }: ImportResultProps)
           />
         </View>
       </Card>
-      <ImportGroups problems={result.problems} duplicates={result.duplicates} />
+      <ImportGroups
+        title="Why rows were skipped"
+        problems={result.problems}
+        duplicates={result.duplicates}
+      />
       {skippedCount > 0 ? (
         <View style={styles.stack}>
           <Heading level={2}>Skipped rows</Heading>
