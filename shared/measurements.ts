@@ -4,9 +4,13 @@
  * stored numbers through these same readers, so the form, the import and the server all word a
  * problem alike.
  */
+import { readWrittenDecimal } from './format/written-decimal';
+
 type MeasurementResult = { ok: true; value: number } | { ok: false; message: string };
 
 type Scale = {
+  /** "weight", "size" */
+  name: string;
   /** The base unit's power of ten for each word a person may write after the number. */
   units: Record<string, number>;
   max: number;
@@ -14,6 +18,7 @@ type Scale = {
 };
 
 const weight: Scale = {
+  name: 'weight',
   units: {
     '': 0,
     g: 0,
@@ -40,6 +45,7 @@ const weight: Scale = {
 };
 
 const length: Scale = {
+  name: 'size',
   units: {
     '': 0,
     mm: 0,
@@ -67,17 +73,28 @@ const length: Scale = {
   },
 };
 
-/** A number (thousands may be grouped with commas), then an optional unit word. */
-const pattern = /^([-+]?)(\d{1,3}(?:,\d{3})+|\d*)(?:\.(\d*))?\s*([a-z]*)\.?$/;
+/** A sign, a number written either way (shared/format/written-decimal.ts), then a unit word. */
+const pattern = /^([-+]?)\s*(\.?\d[\d.,\s\u00a0\u202f'’]*?)\s*([a-z]*)\.?$/;
 
 function read(text: string, scale: Scale): MeasurementResult {
   const { messages } = scale;
-  const match = pattern.exec(text.trim().toLowerCase());
+  const written = text.trim();
+  const match = pattern.exec(written.toLowerCase());
   if (match === null) return { ok: false, message: messages.unreadable };
-  const [, sign = '', whole = '', fraction = '', unit = ''] = match;
+  const [, sign = '', number = '', unit = ''] = match;
   const power = scale.units[unit];
-  const digits = `${whole.replace(/,/g, '')}${fraction}`;
-  if (power === undefined || digits === '') return { ok: false, message: messages.unreadable };
+  const figure = readWrittenDecimal(number.startsWith('.') ? `0${number}` : number);
+  if (power === undefined || figure.kind === 'invalid') {
+    return { ok: false, message: messages.unreadable };
+  }
+  if (figure.kind === 'ambiguous') {
+    return {
+      ok: false,
+      message: `“${written}” could be ${figure.grouped} or ${figure.decimal}: write the ${scale.name} with a decimal point and no thousands separator.`,
+    };
+  }
+  const { whole, fraction } = figure;
+  const digits = `${whole}${fraction}`;
   // Exact decimal arithmetic: the digits shifted by the unit's power, never through a float.
   const shift = power - fraction.length;
   const kept = shift >= 0 ? `${digits}${'0'.repeat(shift)}` : digits.slice(0, shift);

@@ -199,6 +199,9 @@ export function useWorkImportCommitMutation() {
   });
 }
 
+/** Every column an import reads and an example row, downloaded by the browser. */
+export const workImportTemplatePath = '/api/works/import/template.csv';
+
 /**
  * The catalogue as CSV, with the list's search, filters and sort but not its paging, downloaded by
  * the browser with the session cookie.

@@ -137,6 +137,9 @@ export function toNewWorkRow(
     cost_price: null,
     care_notes: null,
     notes: null,
+    // Said outright: rows inserted together share one column list, so a row without it would
+    // send NULL beside a row with it, not the column's default.
+    food_use: 'not-stated',
     ...toWorkColumns(input),
     studio_id: studioId,
     stock_number: stockNumber,

@@ -237,6 +237,28 @@ export async function stockNumbersTaken(
   return taken;
 }
 
+/** The studio's works, archived too, with any of these titles: an import's duplicate check. */
+export async function worksTitled(db: Db, scope: Scope, titles: readonly string[]) {
+  const query = (slice: readonly string[]) =>
+    scoped
+      .works(db, scope)
+      .select([
+        'works.stock_number',
+        'works.title',
+        'works.year',
+        'works.retail_price',
+        'works.currency',
+      ])
+      .where('works.title', 'in', slice)
+      .orderBy('works.id')
+      .execute();
+  const found: Awaited<ReturnType<typeof query>> = [];
+  // SQLite caps bound parameters per statement, so ask in slices.
+  for (let i = 0; i < titles.length; i += 500)
+    found.push(...(await query(titles.slice(i, i + 500))));
+  return found;
+}
+
 /**
  * Inserts the rows, leaving out any whose stock number the studio already uses (a clash is an
  * answer, not a failure, even when two requests race). Answers the ids inserted, by stock number.

@@ -17,6 +17,7 @@ import { validate } from '../http/validate';
 import { writeBody } from '../http/write-body';
 import { photoStore } from '../photos/photo-store';
 import { getStudio } from '../studio/studio.service';
+import { importTemplateCsv } from './import/import-template';
 import { commitImport, previewImport } from './import/works-import.service';
 import { getWorkHistory } from './work-history.repository';
 import { listFacets } from './works.repository';
@@ -64,6 +65,15 @@ export function worksRouter({ db, filesDir }: AppContext) {
         await writeBody(res, '\ufeff');
         await exportWorksCsv(db, scope, query, (chunk) => writeBody(res, chunk));
         res.end();
+      })
+      .get('/import/template.csv', noInput, async (_req, res) => {
+        const studio = await getStudio(db, scopeOf(res));
+        res
+          .type('text/csv; charset=utf-8')
+          .attachment('works-import-template.csv')
+          .set('Cache-Control', 'no-store')
+          // The byte-order mark tells spreadsheet programs the file is UTF-8.
+          .send(`\ufeff${importTemplateCsv(studio.currency)}`);
       })
       .post('/import', importCsv, async (_req, res) => {
         const request = importCsv.input(res).body;

@@ -9,6 +9,7 @@ export * from './parse';
 export * from './payment-terms';
 export * from './price-plan';
 export * from './quotes';
+export * from './read-written-amount';
 export * from './rounding';
 export * from './sale-or-return-age';
 export * from './split';

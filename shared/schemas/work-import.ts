@@ -1,5 +1,7 @@
 import { z } from 'zod';
 
+import { moneySchema } from './money';
+
 /** The work fields a spreadsheet column can be mapped to. */
 export const importFields = [
   'stockNumber',
@@ -61,6 +63,32 @@ export const importColumnLabels: Readonly<Record<ImportColumn, string>> = {
   currency: 'Currency',
 };
 
+/** The name a maker reads for a column an import problem names; the name itself otherwise. */
+export function importColumnLabel(column: string): string {
+  const known = importColumns.find((c) => c === column);
+  return known ? importColumnLabels[known] : column === 'row' ? 'Row' : column;
+}
+
+/** The fields a row cannot be imported without; every other cell may be blank. */
+export const requiredImportFields: readonly ImportField[] = ['title', 'retailPrice'];
+
+/**
+ * Other headers makers commonly use for a column, besides its label and name; matched ignoring
+ * case, spaces and punctuation, so "STOCK NO" is "Stock no.".
+ */
+export const importColumnAliases: Readonly<Partial<Record<ImportColumn, readonly string[]>>> = {
+  stockNumber: ['Stock', 'Stock no.', 'Ref', 'Reference', 'SKU'],
+  retailPrice: ['Price', 'Retail'],
+  costPrice: ['Cost'],
+  firingTempC: ['Firing temperature', 'Firing', 'Temperature'],
+  clayBody: ['Clay'],
+  weightG: ['Weight'],
+  heightMm: ['Height'],
+  widthMm: ['Width'],
+  depthMm: ['Depth'],
+  currency: ['Currency code', 'CCY'],
+};
+
 /** 2 MB of CSV is several thousand works; more than that is better split. */
 export const maxImportCsvLength = 2_000_000;
 
@@ -88,15 +116,50 @@ export const workImportRequestSchema = z.strictObject({
     .max(maxImportCsvLength, { error: 'The file is over 2 MB: split it into smaller files.' }),
   /** Field → column header. Left out, columns are matched by name. */
   mapping: z.partialRecord(importColumnSchema, z.string().max(200)).optional(),
+  /**
+   * Import rows that look like works already imported (same title, year and price) as new works.
+   * A stock number already used is never imported, whatever this says: stock numbers are unique.
+   */
+  importDuplicates: z.boolean({ error: 'Say yes or no.' }).optional(),
 });
 export type WorkImportRequest = z.infer<typeof workImportRequestSchema>;
+
+/**
+ * Why a row looks like one already imported. A stock number already in the catalogue, or on an
+ * earlier row of the file, can never be imported again; a row without one that has the same
+ * title, year and price as a work in the catalogue or an earlier row can, if the maker says so.
+ */
+export const importDuplicateKinds = [
+  'stock-number-in-catalogue',
+  'stock-number-in-file',
+  'same-in-catalogue',
+  'same-in-file',
+] as const;
+export type ImportDuplicateKind = (typeof importDuplicateKinds)[number];
+export const overridableDuplicates: ReadonlySet<ImportDuplicateKind> = new Set([
+  'same-in-catalogue',
+  'same-in-file',
+]);
+
+/** What the row's measured cells were read as; null where blank or unreadable. */
+export const importReadSchema = z.object({
+  retailPrice: moneySchema.nullable(),
+  costPrice: moneySchema.nullable(),
+  heightMm: z.number().nullable(),
+  widthMm: z.number().nullable(),
+  depthMm: z.number().nullable(),
+  weightG: z.number().nullable(),
+});
+export type ImportRead = z.infer<typeof importReadSchema>;
 
 export const importRowSchema = z.object({
   /** 1-based, counting the header row as row 1, as a spreadsheet shows it */
   rowNumber: z.number().int(),
   stockNumber: z.string().nullable(),
   title: z.string().nullable(),
+  read: importReadSchema,
   errors: z.array(z.object({ field: z.string(), message: z.string() })),
+  duplicate: z.object({ kind: z.enum(importDuplicateKinds), message: z.string() }).nullable(),
 });
 export type ImportRow = z.infer<typeof importRowSchema>;
 
@@ -108,7 +171,17 @@ export const importProblemSchema = z.object({
 });
 export type ImportProblem = z.infer<typeof importProblemSchema>;
 
-/** What a preview answers: counts, the rows worth showing, and every problem with its rows. */
+/** One kind of duplicate and every row that is one. */
+export const importDuplicateGroupSchema = z.object({
+  kind: z.enum(importDuplicateKinds),
+  rowNumbers: z.array(z.number().int()),
+});
+export type ImportDuplicateGroup = z.infer<typeof importDuplicateGroupSchema>;
+
+/**
+ * What a preview answers: counts, the rows worth showing, and every problem and duplicate with its
+ * rows. Each row counts once: ready, with problems, or (problems aside) a duplicate.
+ */
 export const workImportPreviewSchema = z.object({
   mode: z.literal('preview'),
   columns: z.array(z.string()),
@@ -116,17 +189,27 @@ export const workImportPreviewSchema = z.object({
   rowCount: z.number().int(),
   validCount: z.number().int(),
   errorCount: z.number().int(),
+  duplicateCount: z.number().int(),
+  /** The duplicates `importDuplicates` would import as new works. */
+  importableDuplicateCount: z.number().int(),
   rows: z.array(importRowSchema),
   problems: z.array(importProblemSchema),
+  duplicates: z.array(importDuplicateGroupSchema),
 });
 export type WorkImportPreview = z.infer<typeof workImportPreviewSchema>;
 
-/** What an import answers: how many went in, the first rows skipped, every problem with its rows. */
+/**
+ * What an import answers: how many went in, the first rows skipped, every problem and duplicate
+ * with its rows, and every skipped row as CSV (the file's own columns and a Problem column) to
+ * correct and import again; null when nothing was skipped.
+ */
 export const workImportResultSchema = z.object({
   mode: z.literal('commit'),
   imported: z.number().int(),
   skippedCount: z.number().int(),
   skipped: z.array(importRowSchema),
   problems: z.array(importProblemSchema),
+  duplicates: z.array(importDuplicateGroupSchema),
+  skippedCsv: z.string().nullable(),
 });
 export type WorkImportResult = z.infer<typeof workImportResultSchema>;

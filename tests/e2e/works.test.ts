@@ -122,7 +122,7 @@ describe('works at phone size', () => {
     await chooser.setFiles({ name: 'beakers.csv', mimeType: 'text/csv', buffer: Buffer.from(csv) });
     await page.getByTestId('import-summary').waitFor();
     expect(await page.getByTestId('import-summary').innerText()).toBe(
-      '50 rows: 47 ready to import, 3 with problems.',
+      '50 rows: 47 ready to import, 2 with problems, 1 duplicate.',
     );
     // Rows as a spreadsheet numbers them: the header is row 1.
     const bad = page.locator('[data-testid^="import-row-error-"]');

@@ -386,6 +386,11 @@ const matrix: Row[] = [
     expect: studioOnly(200),
   },
   {
+    route: 'GET /api/works/import/template.csv',
+    call: () => get('/api/works/import/template.csv'),
+    expect: studioOnly(200),
+  },
+  {
     route: 'POST /api/works/import',
     call: () =>
       post('/api/works/import', {

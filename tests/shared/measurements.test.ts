@@ -26,11 +26,11 @@ describe('parseWeightGrams', () => {
     ['0.85 kilograms', 850],
     ['.5 kg', 500],
     ['2 kilos', 2000],
-    ['1,250 g', 1250],
+    ['1 250 g', 1250],
+    ['1,2 kg', 1200],
     ['1200 g', 1200],
     ['1200 grams', 1200],
     ['450 grammes', 450],
-    ['1.250 kg', 1250],
     ['1.2000 kg', 1200],
   ])('reads %s as %i g', (text, grams) => {
     expect(parseWeightGrams(text)).toEqual({ ok: true, value: grams });
@@ -38,11 +38,11 @@ describe('parseWeightGrams', () => {
 
   it('reads a bare number as grams, the field’s stated unit, with spaces around it', () => {
     expect(parseWeightGrams('  17250 ')).toEqual({ ok: true, value: 17250 });
-    expect(parseWeightGrams('17,250')).toEqual({ ok: true, value: 17250 });
+    expect(parseWeightGrams('17 250')).toEqual({ ok: true, value: 17250 });
   });
 
   it('refuses what is not a weight in grams or kilograms, in one wording', () => {
-    for (const text of ['', 'heavy', 'kg', '3 lb', '1,2 kg', '1.2.3 kg', '12 stone', '1e3']) {
+    for (const text of ['', 'heavy', 'kg', '3 lb', '1.2.3 kg', '12 stone', '1e3']) {
       expect(parseWeightGrams(text)).toEqual({ ok: false, message: weightWords.unreadable });
     }
   });
@@ -68,11 +68,30 @@ describe('parseWeightGrams', () => {
   it('gives back any whole number of grams in range written as grams or as kilograms', () => {
     fc.assert(
       fc.property(fc.integer({ min: 1, max: 2_000_000 }), (grams) => {
-        const kilograms = `${Math.trunc(grams / 1000)}.${String(grams % 1000).padStart(3, '0')}`;
+        // Four decimal places: three could also be read as thousands grouped (see below).
+        const kilograms = `${Math.trunc(grams / 1000)}.${String(grams % 1000).padStart(3, '0')}0`;
         expect(parseWeightGrams(`${grams} g`)).toEqual({ ok: true, value: grams });
         expect(parseWeightGrams(`${kilograms} kg`)).toEqual({ ok: true, value: grams });
       }),
     );
+  });
+});
+
+describe('a mark either convention could mean', () => {
+  // Unicode CLDR number symbols: en-GB writes 1,250.5 and de-DE 1.250,5, so "1,250" and "1.250"
+  // are 1250 in one and 1.25 in the other.
+  it('is refused with both readings, as prices are', () => {
+    expect(parseWeightGrams('1,250 kg')).toEqual({
+      ok: false,
+      message:
+        '“1,250 kg” could be 1250 or 1.25: write the weight with a decimal point and no thousands separator.',
+    });
+    expect(parseWeightGrams('1.250 kg')).toMatchObject({ ok: false });
+    expect(parseLengthMm('1,250 mm')).toEqual({
+      ok: false,
+      message:
+        '“1,250 mm” could be 1250 or 1.25: write the size with a decimal point and no thousands separator.',
+    });
   });
 });
 
@@ -87,14 +106,14 @@ describe('parseLengthMm', () => {
     ['140 millimetres', 140],
     ['35 centimeters', 350],
     ['1.2 m', 1200],
-    ['1,250 mm', 1250],
+    ['14,5 cm', 145],
     ['140', 140],
   ])('reads %s as %i mm', (text, mm) => {
     expect(parseLengthMm(text)).toEqual({ ok: true, value: mm });
   });
 
   it('refuses what is not a size in millimetres, centimetres or metres, in one wording', () => {
-    for (const text of ['', 'tall', 'cm', '6 in', '5 ft', '14,5 cm']) {
+    for (const text of ['', 'tall', 'cm', '6 in', '5 ft']) {
       expect(parseLengthMm(text)).toEqual({ ok: false, message: sizeWords.unreadable });
     }
   });

@@ -1,4 +1,3 @@
-import { Link } from 'expo-router';
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
@@ -11,28 +10,40 @@ import { Select } from '@/components/ui/select';
 import { EmptyView, LoadingView } from '@/components/ui/status-views';
 import { Heading, Text } from '@/components/ui/text';
 import { TextLink } from '@/components/ui/text-link';
+import { TickBox } from '@/components/ui/tick-box';
 import { spacing } from '@/constants/theme';
 import { errorMessage } from '@/hooks/api-errors';
+import { useStudioQuery } from '@/hooks/queries/studio';
 import { useWorkImportCommitMutation, useWorkImportPreviewMutation } from '@/hooks/queries/works';
 import {
   type ImportColumn,
   importColumnLabels,
   importColumns,
   maxImportRows,
+  overridableDuplicates,
 } from '@/shared/schemas/work-import';
 
+import { ImportColumnsGuide } from './import-columns-guide';
+import { ImportGroups } from './import-groups';
+import { ImportResult } from './import-result';
 import { ImportRows } from './import-rows';
 import { chooseCsvFile, type ChosenCsv } from './read-csv-file';
 
 type Mapping = Partial<Record<ImportColumn, string>>;
 
-/** Choose a CSV, see every row checked and how columns map, then import the good rows or nothing. */
+/**
+ * Choose a CSV, see every row checked (what it reads as, its problems, whether it repeats a work)
+ * and how columns map, then import the rows that go in; afterwards the skipped rows stay listed,
+ * with a CSV of them to correct.
+ */
 export function WorkImportScreen() {
   const preview = useWorkImportPreviewMutation();
   const commit = useWorkImportCommitMutation();
+  const studio = useStudioQuery();
   const [file, setFile] = useState<ChosenCsv | null>(null);
   const [mapping, setMapping] = useState<Mapping | null>(null);
   const [mappingChanged, setMappingChanged] = useState(false);
+  const [importDuplicates, setImportDuplicates] = useState(false);
   const [problem, setProblem] = useState<string | null>(null);
 
   const runPreview = (csv: ChosenCsv, withMapping?: Mapping) =>
@@ -53,6 +64,7 @@ export function WorkImportScreen() {
       if (!chosen) return;
       commit.reset();
       setFile(chosen);
+      setImportDuplicates(false);
       runPreview(chosen);
     } catch (error) {
       setProblem(errorMessage(error));
@@ -68,52 +80,45 @@ export function WorkImportScreen() {
 
   const data = preview.data;
   const columns = data?.columns ?? [];
+  const toImport = data
+    ? data.validCount + (importDuplicates ? data.importableDuplicateCount : 0)
+    : 0;
 
   return (
-    <Screen testID="work-import-screen">
+    // A scroll view of its own for the result, so that it opens at its top rather than where the
+    // Import button was.
+    <Screen testID="work-import-screen" key={commit.isSuccess ? 'result' : 'check'}>
       <View style={styles.heading}>
         <TextLink href="/works" label="All works" />
         <Heading level={1}>Import works from CSV</Heading>
         <Text variant="small">
           Save the spreadsheet as CSV with a header row, up to{' '}
-          {maxImportRows.toLocaleString('en-GB')} rows. Prices are in the studio’s currency, with a
-          decimal point (12.50). Nothing is written until you press Import; duplicate stock numbers
-          are reported, not merged.
+          {maxImportRows.toLocaleString('en-GB')} rows. Nothing is written until you press Import;
+          rows that repeat a work already in the catalogue are set aside, not merged.
         </Text>
       </View>
 
       {problem ? <Notice message={problem} /> : null}
 
-      {commit.isSuccess ? (
-        <Card testID="import-done">
-          <Heading level={2}>{`${counted(commit.data.imported, 'work')} imported`}</Heading>
-          <Text testID="import-done-summary">
-            {commit.data.skippedCount === 0
-              ? 'Every row was imported.'
-              : `${counted(commit.data.skippedCount, 'row')} skipped because of the problems below.`}
-          </Text>
-          {commit.data.skippedCount > 0 ? <ImportRows rows={commit.data.skipped} /> : null}
-          <View style={styles.row}>
-            <Link href="/works" asChild>
-              <Button testID="import-to-works" label="See the works" />
-            </Link>
-            <Button label="Import another file" variant="secondary" onPress={cancel} />
-          </View>
-        </Card>
+      {commit.isSuccess && file ? (
+        <ImportResult result={commit.data} fileName={file.name} onAnother={cancel} />
       ) : !file ? (
-        <Card>
-          <EmptyView
-            title="No file chosen"
-            message="Choose a CSV file to see every row checked before anything is imported."
-          />
-          <View style={styles.start}>
-            <Button
-              testID="import-choose"
-              label="Choose a CSV file"
-              onPress={() => void choose()}
+        <>
+          <Card>
+            <EmptyView
+              title="No file chosen"
+              message="Choose a CSV file to see every row checked before anything is imported."
             />
-          </View>
-        </Card>
+            <View style={styles.start}>
+              <Button
+                testID="import-choose"
+                label="Choose a CSV file"
+                onPress={() => void choose()}
+              />
+            </View>
+          </Card>
+          <ImportColumnsGuide currency={studio.data?.currency ?? 'the studio’s currency'} />
+        </>
       ) : preview.isPending ? (
         <LoadingView message={`Checking ${file.name}…`} />
       ) : preview.isError ? (
@@ -129,9 +134,25 @@ export function WorkImportScreen() {
           <Card style={styles.stack}>
             <Heading level={2}>{file.name}</Heading>
             <Text testID="import-summary">
-              {`${counted(data.rowCount, 'row')}: ${data.validCount} ready to import, ${data.errorCount} with problems.`}
+              {`${counted(data.rowCount, 'row')}: ${data.validCount} ready to import, ${data.errorCount} with problems${data.duplicateCount > 0 ? `, ${counted(data.duplicateCount, 'duplicate')}` : ''}.`}
             </Text>
+            {data.importableDuplicateCount > 0 ? (
+              <TickBox
+                testID="import-duplicates-anyway"
+                label={`Import them anyway as new works (${counted(data.importableDuplicateCount, 'row')} with the same title, year and price as a work in the catalogue or an earlier row)`}
+                ticked={importDuplicates}
+                onToggle={() => setImportDuplicates((d) => !d)}
+              />
+            ) : null}
+            {data.duplicates.some((d) => !overridableDuplicates.has(d.kind)) ? (
+              <Text variant="small" testID="import-taken-note">
+                Rows whose stock number is already used are never imported: stock numbers are
+                unique.
+              </Text>
+            ) : null}
           </Card>
+
+          <ImportGroups problems={data.problems} duplicates={data.duplicates} />
 
           <Card style={styles.stack}>
             <Heading level={2}>Columns</Heading>
@@ -176,10 +197,10 @@ export function WorkImportScreen() {
             <Heading level={2}>Rows</Heading>
             {data.rows.length < data.rowCount ? (
               <Text variant="small" testID="import-rows-shown">
-                {`Showing ${data.rows.length} of ${data.rowCount} rows: the first ones ready to import and the first ones with a problem.`}
+                {`Showing ${data.rows.length} of ${data.rowCount} rows: the first ones ready to import and the first ones that will not be.`}
               </Text>
             ) : null}
-            <ImportRows rows={data.rows} />
+            <ImportRows rows={data.rows} importDuplicates={importDuplicates} />
           </View>
 
           {commit.isError ? (
@@ -188,11 +209,13 @@ export function WorkImportScreen() {
           <View style={styles.row}>
             <Button
               testID="import-commit"
-              label={`Import ${counted(data.validCount, 'work')}`}
+              label={`Import ${counted(toImport, 'work')}`}
               busyLabel="Importing…"
               busy={commit.isPending}
-              disabled={data.validCount === 0 || mappingChanged}
-              onPress={() => commit.mutate({ csv: file.text, mapping: mapping ?? undefined })}
+              disabled={toImport === 0 || mappingChanged}
+              onPress={() =>
+                commit.mutate({ csv: file.text, mapping: mapping ?? undefined, importDuplicates })
+              }
             />
             <Button testID="import-cancel" label="Cancel" variant="secondary" onPress={cancel} />
           </View>

@@ -23,7 +23,7 @@ const columns: [string, (work: Work) => Cell][] = [
 ];
 
 // papaparse's own `true` tests /^[=+\-@\t\r].*$/, which a cell with a line break escapes.
-const csvOptions = { escapeFormulae: /^[=+\-@\t\r]/, newline: '\r\n' } as const;
+export const csvOptions = { escapeFormulae: /^[=+\-@\t\r]/, newline: '\r\n' } as const;
 
 /** The header line of the catalogue's CSV, with its line break. */
 export function worksCsvHeader(): string {

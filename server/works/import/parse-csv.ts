@@ -2,6 +2,7 @@ import Papa from 'papaparse';
 
 import {
   type ImportColumn,
+  importColumnAliases,
   importColumnLabels,
   importColumns,
   maxImportRows,
@@ -9,7 +10,13 @@ import {
 
 import { HttpError } from '../../http/http-error';
 
-export type CsvRecord = { rowNumber: number; cells: string[]; parseError: string | null };
+/** `raw` is the row as the file has it, for handing back; `cells` as the import reads it. */
+export type CsvRecord = {
+  rowNumber: number;
+  raw: string[];
+  cells: string[];
+  parseError: string | null;
+};
 
 /**
  * Header row and records; row numbers count the header as row 1, as a spreadsheet shows it. A
@@ -25,6 +32,7 @@ export function parseCsv(csv: string): { columns: string[]; records: CsvRecord[]
   const records = rows
     .map((cells, i) => ({
       rowNumber: i + 2,
+      raw: cells,
       cells: cells.map(unescapeFormula),
       parseError: errorsByRow.get(i + 1) ?? null,
     }))
@@ -42,21 +50,7 @@ export function parseCsv(csv: string): { columns: string[]; records: CsvRecord[]
 /** The export's guard against spreadsheet formulas ("'=…"), taken off again. */
 const unescapeFormula = (cell: string) => (/^'[=+\-@\t\r]/.test(cell) ? cell.slice(1) : cell);
 
-const normalise = (name: string) => name.toLowerCase().replace(/[^a-z0-9]/g, '');
-
-/** A few headers makers commonly use for a field, besides its name and label. */
-const aliases: Partial<Record<ImportColumn, string[]>> = {
-  stockNumber: ['stock', 'stockno', 'ref', 'reference', 'sku'],
-  retailPrice: ['price', 'retail'],
-  costPrice: ['cost'],
-  firingTempC: ['firingtemperature', 'firing', 'temperature'],
-  clayBody: ['clay'],
-  weightG: ['weight'],
-  heightMm: ['height'],
-  widthMm: ['width'],
-  depthMm: ['depth'],
-  currency: ['currencycode', 'ccy'],
-};
+export const normaliseHeader = (name: string) => name.toLowerCase().replace(/[^a-z0-9]/g, '');
 
 /**
  * Which column feeds each field: the mapping sent (each header must be in the file), or else
@@ -81,8 +75,10 @@ export function resolveMapping(
   const resolved: Partial<Record<ImportColumn, string>> = {};
   const used = new Set<string>();
   for (const field of importColumns) {
-    const names = [field, importColumnLabels[field], ...(aliases[field] ?? [])].map(normalise);
-    const header = columns.find((c) => !used.has(c) && names.includes(normalise(c)));
+    const names = [field, importColumnLabels[field], ...(importColumnAliases[field] ?? [])].map(
+      normaliseHeader,
+    );
+    const header = columns.find((c) => !used.has(c) && names.includes(normaliseHeader(c)));
     if (header !== undefined) {
       resolved[field] = header;
       used.add(header);

@@ -1,10 +1,13 @@
 import { type WorkCreateParsed } from '@/shared/schemas/work';
 import {
   type ImportColumn,
+  importColumnLabel,
+  type ImportDuplicateGroup,
   type ImportProblem,
   type ImportRow,
   listedProblemRows,
   listedReadyRows,
+  overridableDuplicates,
   type WorkImportPreview,
   type WorkImportRequest,
   type WorkImportResult,
@@ -16,15 +19,17 @@ import { eachSlice, mapInSlices } from '../../runtime/slices';
 import { getStudio } from '../../studio/studio.service';
 import { stockNumberAllocator } from '../stock-numbers';
 import { toNewWorkRow } from '../works.mapper';
-import { insertWorks, stockNumbersTaken } from '../works.repository';
+import { insertWorks } from '../works.repository';
+import { markDuplicates, stockNumberInCatalogue } from './import-duplicates';
 import { parseImportRow } from './import-row';
 import { parseCsv, resolveMapping } from './parse-csv';
+import { skippedRowsCsv } from './skipped-csv';
 
-type CheckedRow = ImportRow & { work: WorkCreateParsed | null };
+type CheckedRow = ImportRow & { work: WorkCreateParsed | null; raw: string[] };
 
 /**
- * Every row of the file, checked as the create form checks a work, plus duplicate stock numbers
- * within the file and against the catalogue (reported on the row, never merged). The rows are
+ * Every row of the file, checked as the create form checks a work, and marked when it repeats a
+ * work in the catalogue or an earlier row (reported on the row, never merged). The rows are
  * checked in slices, so a large file never keeps the server from answering others meanwhile.
  */
 async function checkRows(db: Db, scope: Scope, request: WorkImportRequest) {
@@ -39,55 +44,42 @@ async function checkRows(db: Db, scope: Scope, request: WorkImportRequest) {
     const values = Object.fromEntries(
       mapped.map(([field, index]) => [field, record.cells[index] ?? '']),
     );
-    const { work, errors } = parseImportRow(values, studio.currency);
+    const { work, read, errors } = parseImportRow(values, studio.currency);
     if (record.parseError) errors.unshift({ field: 'row', message: record.parseError });
     return {
       rowNumber: record.rowNumber,
       stockNumber: values.stockNumber?.trim() || null,
       title: values.title?.trim() || null,
+      read,
       errors,
+      duplicate: null,
       work: record.parseError ? null : work,
+      raw: record.raw,
     };
   });
-
-  const rowsByStock = new Map<string, number[]>();
-  for (const row of rows) {
-    if (row.stockNumber === null) continue;
-    rowsByStock.set(row.stockNumber, [...(rowsByStock.get(row.stockNumber) ?? []), row.rowNumber]);
-  }
-  const inCatalogue = await stockNumbersTaken(db, scope, [...rowsByStock.keys()]);
-  for (const row of rows) {
-    if (row.stockNumber === null) continue;
-    const others = rowsByStock.get(row.stockNumber)!.filter((n) => n !== row.rowNumber);
-    if (others.length > 0) {
-      row.errors.push({
-        field: 'stockNumber',
-        message: `The stock number ${row.stockNumber} is also on row ${others.join(', ')} of the file.`,
-      });
-    }
-    if (inCatalogue.has(row.stockNumber)) row.errors.push(takenError(row.stockNumber));
-    if (row.errors.length > 0) row.work = null;
-  }
+  await markDuplicates(db, scope, rows);
   return { studio, columns, mapping, rows };
 }
 
-const takenError = (stockNumber: string) => ({
-  field: 'stockNumber',
-  message: `The stock number ${stockNumber} is already used by a work in the catalogue.`,
-});
+/** Whether a row goes in: no problems, and no duplicate unless one the maker chose to import. */
+const goesIn = (row: CheckedRow, importDuplicates: boolean) =>
+  row.work !== null &&
+  (row.duplicate === null || (importDuplicates && overridableDuplicates.has(row.duplicate.kind)));
 
 /** A row as a list shows it: a long title is cut, since the row number finds it in the file. */
-const publicRow = ({ work: _work, title, ...row }: CheckedRow): ImportRow => ({
+const publicRow = ({ work: _work, raw: _raw, title, ...row }: CheckedRow): ImportRow => ({
   ...row,
   title: title !== null && title.length > 80 ? `${title.slice(0, 79)}…` : title,
 });
 
-/** The rows a list shows: the first ready ones and the first ones with a problem, in file order. */
-function listed(rows: readonly CheckedRow[]): ImportRow[] {
+/** The rows a list shows: the first ready ones and the first ones skipped, in file order. */
+function listed(rows: readonly CheckedRow[], importDuplicates = false): ImportRow[] {
   let ready = 0;
-  let bad = 0;
+  let skipped = 0;
   return rows
-    .filter((row) => (row.work === null ? bad++ < listedProblemRows : ready++ < listedReadyRows))
+    .filter((row) =>
+      goesIn(row, importDuplicates) ? ready++ < listedReadyRows : skipped++ < listedProblemRows,
+    )
     .map(publicRow);
 }
 
@@ -105,6 +97,18 @@ function problemsOf(rows: readonly CheckedRow[]): ImportProblem[] {
   return [...byProblem.values()];
 }
 
+/** Each kind of duplicate, with all the rows that are one. */
+function duplicatesOf(rows: readonly CheckedRow[]): ImportDuplicateGroup[] {
+  const byKind = new Map<string, ImportDuplicateGroup>();
+  for (const row of rows) {
+    if (row.duplicate === null) continue;
+    const group = byKind.get(row.duplicate.kind) ?? { kind: row.duplicate.kind, rowNumbers: [] };
+    group.rowNumbers.push(row.rowNumber);
+    byKind.set(row.duplicate.kind, group);
+  }
+  return [...byKind.values()];
+}
+
 /** Checks the file and writes nothing. */
 export async function previewImport(
   db: Db,
@@ -112,35 +116,42 @@ export async function previewImport(
   request: WorkImportRequest,
 ): Promise<WorkImportPreview> {
   const { columns, mapping, rows } = await checkRows(db, scope, request);
-  const validCount = rows.filter((r) => r.work !== null).length;
+  const checked = rows.filter((r) => r.work !== null);
+  const duplicates = checked.filter((r) => r.duplicate !== null);
   return {
     mode: 'preview',
     columns,
     mapping,
     rowCount: rows.length,
-    validCount,
-    errorCount: rows.length - validCount,
+    validCount: checked.length - duplicates.length,
+    errorCount: rows.length - checked.length,
+    duplicateCount: duplicates.length,
+    importableDuplicateCount: duplicates.filter((r) => overridableDuplicates.has(r.duplicate!.kind))
+      .length,
     rows: listed(rows),
     problems: problemsOf(rows),
+    duplicates: duplicatesOf(rows),
   };
 }
 
 /**
- * Checks the file again and inserts every valid row in one transaction: all of them or, if
- * anything fails, none. Rows without a stock number get the next ones from the pattern; a row
- * whose stock number was taken since the check is skipped and reported like any other bad row.
+ * Checks the file again and inserts every row that goes in, in one transaction: all of them or,
+ * if anything fails, none. Rows without a stock number get the next ones from the pattern; a row
+ * whose stock number was taken since the check is skipped as a duplicate. Every skipped row comes
+ * back as CSV, with why, to correct and import again.
  */
 export async function commitImport(
   db: Db,
   scope: Scope,
   request: WorkImportRequest,
 ): Promise<WorkImportResult> {
-  const { studio, rows } = await checkRows(db, scope, request);
-  const valid = rows.filter((r) => r.work !== null);
-  const given = valid.map((r) => r.work!.stockNumber).filter((s): s is string => !!s);
+  const { studio, columns, rows } = await checkRows(db, scope, request);
+  const importDuplicates = request.importDuplicates ?? false;
+  const going = rows.filter((r) => goesIn(r, importDuplicates));
+  const given = going.map((r) => r.work!.stockNumber).filter((s): s is string => !!s);
   return db.transaction().execute(async (trx) => {
     const allocator = await stockNumberAllocator(trx, scope, studio, given);
-    const numbered = valid.map((row) => ({
+    const numbered = going.map((row) => ({
       row,
       insert: toNewWorkRow(row.work!, scope.studioId, row.work!.stockNumber ?? allocator.next()),
     }));
@@ -152,18 +163,33 @@ export async function commitImport(
       );
       for (const [stockNumber, id] of ids) inserted.set(stockNumber, id);
     });
+    const skipped = rows.filter((r) => !goesIn(r, importDuplicates));
     for (const { row, insert } of numbered) {
       if (inserted.has(insert.stock_number)) continue;
-      row.errors.push(takenError(insert.stock_number));
-      row.work = null;
+      row.duplicate = stockNumberInCatalogue(insert.stock_number);
+      skipped.push(row);
     }
-    const skipped = rows.filter((r) => r.work === null);
+    skipped.sort((a, b) => a.rowNumber - b.rowNumber);
     return {
       mode: 'commit',
       imported: inserted.size,
       skippedCount: skipped.length,
       skipped: listed(skipped),
       problems: problemsOf(skipped),
+      duplicates: duplicatesOf(skipped),
+      skippedCsv:
+        skipped.length === 0
+          ? null
+          : skippedRowsCsv(
+              columns,
+              skipped.map((row) => ({
+                raw: row.raw,
+                problems: [
+                  ...row.errors.map((e) => `${importColumnLabel(e.field)}: ${e.message}`),
+                  ...(row.duplicate ? [row.duplicate.message] : []),
+                ],
+              })),
+            ),
     };
   });
 }

@@ -35,6 +35,7 @@ export const protectedRoutes: {
   { route: 'GET /api/works', roles: ['owner', 'assistant'] },
   { route: 'GET /api/works/facets', roles: ['owner', 'assistant'] },
   { route: 'GET /api/works/export.csv', roles: ['owner', 'assistant'] },
+  { route: 'GET /api/works/import/template.csv', roles: ['owner', 'assistant'] },
   { route: 'POST /api/works/import', roles: ['owner', 'assistant'] },
   { route: 'POST /api/works', roles: ['owner', 'assistant'] },
   { route: 'GET /api/works/:id', roles: ['owner', 'assistant'] },

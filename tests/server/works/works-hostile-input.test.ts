@@ -183,6 +183,14 @@ describe('a work’s currency', () => {
 });
 
 describe('POST /api/works/import with heavy or hostile files', () => {
+  const nothingRead = {
+    retailPrice: null,
+    costPrice: null,
+    heightMm: null,
+    widthMm: null,
+    depthMm: null,
+    weightG: null,
+  };
   const commit = async (f: Fixture, csv: string) =>
     request(f.app)
       .post('/api/works/import')
@@ -202,6 +210,8 @@ describe('POST /api/works/import with heavy or hostile files', () => {
       skippedCount: 0,
       skipped: [],
       problems: [],
+      duplicates: [],
+      skippedCsv: null,
     });
     const numbers = await f.db.selectFrom('works').select('stock_number').execute();
     expect(numbers.map((n) => n.stock_number).sort()).toEqual([
@@ -220,15 +230,27 @@ describe('POST /api/works/import with heavy or hostile files', () => {
     const res = await commit(f, 'Stock number,Title,Price\nCLASH-1,First,10\nCLASH-2,Second,11\n');
     expect(res.status).toBe(200);
     const taken = {
-      field: 'stockNumber',
-      message: 'The stock number CLASH-2 is already used by a work in the catalogue.',
+      kind: 'stock-number-in-catalogue',
+      message:
+        'The stock number CLASH-2 is already used by a work in the catalogue; stock numbers are unique, so this row cannot be imported.',
     };
     expect(res.body).toEqual({
       mode: 'commit',
       imported: 1,
       skippedCount: 1,
-      skipped: [{ rowNumber: 3, stockNumber: 'CLASH-2', title: 'Second', errors: [taken] }],
-      problems: [{ ...taken, rowNumbers: [3] }],
+      skipped: [
+        {
+          rowNumber: 3,
+          stockNumber: 'CLASH-2',
+          title: 'Second',
+          read: { ...nothingRead, retailPrice: { amount: 1100, currency: 'GBP' } },
+          errors: [],
+          duplicate: taken,
+        },
+      ],
+      problems: [],
+      duplicates: [{ kind: taken.kind, rowNumbers: [3] }],
+      skippedCsv: `Stock number,Title,Price,Problem\r\nCLASH-2,Second,11,"${taken.message}"\r\n`,
     });
   });
 
@@ -245,8 +267,19 @@ describe('POST /api/works/import with heavy or hostile files', () => {
       mode: 'commit',
       imported: 2,
       skippedCount: 1,
-      skipped: [{ rowNumber: 3, stockNumber: null, title: 'Bowl', errors: [otherCurrency] }],
+      skipped: [
+        {
+          rowNumber: 3,
+          stockNumber: null,
+          title: 'Bowl',
+          read: { ...nothingRead, retailPrice: { amount: 1200, currency: 'GBP' } },
+          errors: [otherCurrency],
+          duplicate: null,
+        },
+      ],
       problems: [{ ...otherCurrency, rowNumbers: [3] }],
+      duplicates: [],
+      skippedCsv: `Title,Price,Currency,Problem\r\nBowl,12,EUR,"Currency: ${otherCurrency.message}"\r\n`,
     });
   });
 
