@@ -1,5 +1,5 @@
 import { isoDateInTimeZone } from '@/shared/money/calendar';
-import { stockNumberPatternSchema,type StudioSettings } from '@/shared/schemas/studio';
+import { stockNumberPatternSchema, type StudioSettings } from '@/shared/schemas/studio';
 import { counterOf, formatStockNumber, nextStockNumber } from '@/shared/works/stock-number';
 
 /**

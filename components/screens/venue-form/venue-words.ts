@@ -4,7 +4,9 @@ import {
   type InsuranceBasis,
   type Insurer,
   type PaymentTerms,
- type Terms,  type VenueRole } from '@/shared/schemas/terms';
+  type Terms,
+  type VenueRole,
+} from '@/shared/schemas/terms';
 import { type VenueKind } from '@/shared/schemas/venue';
 import { percent } from '@/shared/terms/terms-in-words';
 
