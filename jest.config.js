@@ -54,6 +54,9 @@ module.exports = {
       testEnvironment: 'node',
       testMatch: ['<rootDir>/tests/{shared,server,documents}/**/*.test.ts'],
       moduleNameMapper: alias,
+      // Under `npm run test:pg` (SAGGAR_TEST_DB=postgres): a PostgreSQL cluster for the run.
+      globalSetup: '<rootDir>/tests/server/helpers/postgres-setup.ts',
+      globalTeardown: '<rootDir>/tests/server/helpers/postgres-teardown.ts',
       transform: {
         '^.+\\.(t|j|mj|cj)sx?$': [
           '@swc/jest',

@@ -1,5 +1,3 @@
-import { sql } from 'kysely';
-
 import { scoped } from '../access/scoped';
 import { type Scope } from '../access/viewer';
 import { type Db } from '../db/database';
@@ -8,6 +6,7 @@ import {
   type StatementState,
   type StatementUpdate,
 } from '../db/schema/statements';
+import { matchesLike } from '../db/text-search';
 
 /** One statement the scope may see, with its venue and consignment. */
 export async function findStatementRow(db: Db, scope: Scope, id: number) {
@@ -49,7 +48,7 @@ export async function listStatementReferencesLike(db: Db, scope: Scope, prefix: 
   const rows = await scoped
     .statements(db, scope)
     .select('statements.reference')
-    .where(sql<boolean>`statements.reference like ${`${prefix}%`}`)
+    .where(matchesLike(db, 'statements.reference', `${prefix}%`))
     .execute();
   return rows.map((r) => r.reference);
 }
