@@ -255,7 +255,9 @@ export async function insertHoldingLine(
       insurance_value: line.insuranceValue,
       holds_work: 1,
     })
-    .onConflict((oc) => oc.columns(['work_id', 'holds_work']).doNothing())
+    // Any clash (another line holding the work, or this consignment's earlier line of it) is an
+    // answer, not an error: on PostgreSQL an error would end the transaction it is in.
+    .onConflict((oc) => oc.doNothing())
     .returning('id')
     .executeTakeFirst();
   return inserted?.id;

@@ -48,14 +48,17 @@ export function likeIgnoringCase(db: AnyDb): 'like' | 'ilike' {
 }
 
 /**
- * For `query.$call(lockedForUpdate(trx))`: on PostgreSQL the rows read stay locked until the
- * transaction ends, so a read-then-write cannot interleave with another one. SQLite needs none: a
- * process runs one transaction at a time, and a second process's write makes the first one's
- * write fail (busy) instead of passing unseen.
+ * For `query.$call(lockedForUpdate(trx))`: on PostgreSQL the rows read stay locked against other
+ * writers until the transaction ends, so a read-then-write cannot interleave with another one
+ * (FOR NO KEY UPDATE: rows referring to them may still be written, so that writing, say, an
+ * audit entry of the studio never waits on the studio's lock). SQLite needs none: a process runs
+ * one transaction at a time, and a second process's write makes the first one's fail (busy)
+ * instead of passing unseen.
  */
 export function lockedForUpdate(db: AnyDb) {
   const postgres = isPostgres(db);
-  return <Q extends { forUpdate: () => Q }>(query: Q): Q => (postgres ? query.forUpdate() : query);
+  return <Q extends { forNoKeyUpdate: () => Q }>(query: Q): Q =>
+    postgres ? query.forNoKeyUpdate() : query;
 }
 
 /**

@@ -162,11 +162,13 @@ export async function openEmptyTestDatabase(): Promise<Kysely<any>> {
   return db;
 }
 
-/** The location `startServerProcess` is given: a SQLite file, or an emptied PostgreSQL database. */
+/**
+ * The location `startServerProcess` is given for the database shared as `sqliteFile`: the file
+ * itself, or that PostgreSQL database's URL (an emptied one if no test has opened it yet).
+ */
 export async function testDatabaseLocation(sqliteFile: string): Promise<string> {
   if (testDatabaseKind === 'sqlite') return sqliteFile;
-  const db = await openTestDatabase(sqliteFile);
-  await db.destroy();
+  if (!shared.has(sqliteFile)) await openTestDatabase(sqliteFile);
   return databaseUrl(shared.get(sqliteFile)!);
 }
 
