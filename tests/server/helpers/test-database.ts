@@ -68,11 +68,38 @@ async function takePostgresDatabase(): Promise<{ name: string; fresh: boolean }>
   if (again) return { name: again, fresh: false };
   const name = `saggar_test_w${process.env.JEST_WORKER_ID ?? '1'}_${taken++}`;
   const { rows } = await sql`select 1 from pg_database where datname = ${name}`.execute(adminDb());
-  if (rows.length > 0) return { name, fresh: false };
+  if (rows.length > 0) {
+    if ((await schemaOf(name)) === (await schemaOf(templateDatabase))) {
+      return { name, fresh: false };
+    }
+    // A test changed its tables (a trigger, a table renamed): made again, from the template.
+    await sql`drop database ${sql.id(name)} with (force)`.execute(adminDb());
+  }
   await sql`create database ${sql.id(name)} template ${sql.id(templateDatabase)}`.execute(
     adminDb(),
   );
   return { name, fresh: true };
+}
+
+const schemas = new Map<string, string>();
+
+/** What a database's tables, columns, triggers and functions are, as one string to compare. */
+async function schemaOf(name: string): Promise<string> {
+  const known = name === templateDatabase ? schemas.get(name) : undefined;
+  if (known) return known;
+  const db = openDatabase(databaseUrl(name));
+  try {
+    const { rows } = await sql<{ schema: string }>`select concat_ws(' | ',
+      (select string_agg(table_name || '.' || column_name || ' ' || data_type, ',' order by
+        table_name, column_name) from information_schema.columns where table_schema = 'public'),
+      (select string_agg(tgname, ',' order by tgname) from pg_trigger where not tgisinternal),
+      (select string_agg(proname, ',' order by proname) from pg_proc
+        where pronamespace = 'public'::regnamespace)) as schema`.execute(db);
+    schemas.set(name, rows[0]!.schema);
+    return rows[0]!.schema;
+  } finally {
+    await db.destroy();
+  }
 }
 
 /** The tables whose rows a test writes: all but Kysely's record of the migrations. */
