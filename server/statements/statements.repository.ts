@@ -1,6 +1,7 @@
 import { scoped } from '../access/scoped';
 import { type Scope } from '../access/viewer';
 import { type Db } from '../db/database';
+import { lockedForUpdate } from '../db/dialect';
 import {
   type NewStatementRow,
   type StatementState,
@@ -273,4 +274,18 @@ export async function listStatementStatesOf(db: Db, scope: Scope, consignmentId:
     .where('statements.state', '!=', 'void')
     .execute();
   return rows.map((r) => r.state);
+}
+
+/**
+ * Locks the statement's row until the transaction ends (on PostgreSQL): issuing it, and payments
+ * and explanations that may settle it, each work out its balance from what the one before left.
+ */
+export async function lockStatement(db: Db, scope: Scope, id: number): Promise<void> {
+  await db
+    .selectFrom('statements')
+    .select('statements.id')
+    .where('statements.studio_id', '=', scope.studioId)
+    .where('statements.id', '=', id)
+    .$call(lockedForUpdate(db))
+    .execute();
 }
