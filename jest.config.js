@@ -54,6 +54,13 @@ module.exports = {
       testEnvironment: 'node',
       testMatch: ['<rootDir>/tests/{shared,server,documents}/**/*.test.ts'],
       moduleNameMapper: alias,
+      // Under `npm run test:pg` (SAGGAR_TEST_DB=postgres): a PostgreSQL cluster for the run.
+      globalSetup: '<rootDir>/tests/server/helpers/postgres-setup.ts',
+      globalTeardown: '<rootDir>/tests/server/helpers/postgres-teardown.ts',
+      // What only PostgreSQL offers (several server processes writing at once) is tested in
+      // that run alone, in files named *.postgres.test.ts.
+      testPathIgnorePatterns:
+        process.env.SAGGAR_TEST_DB === 'postgres' ? [] : ['\\.postgres\\.test\\.ts$'],
       transform: {
         '^.+\\.(t|j|mj|cj)sx?$': [
           '@swc/jest',

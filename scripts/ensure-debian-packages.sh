@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
-# The tests need two Debian packages: Chromium for the browser tests, and poppler-utils
-# (pdftotext, pdftoppm, pdfinfo) to read back the PDF documents. Install what is missing when
+# The tests need three Debian packages: Chromium for the browser tests, poppler-utils
+# (pdftotext, pdftoppm, pdfinfo) to read back the PDF documents, and postgresql (initdb, pg_ctl)
+# for the server tests' run on PostgreSQL, in a throwaway cluster. Install what is missing when
 # running as root; otherwise say exactly what to run and fail. Never let tests be skipped quietly.
 #
 #   bash scripts/ensure-debian-packages.sh                 # every package below
@@ -11,18 +12,22 @@ set -euo pipefail
 declare -A provides=(
   [chromium]="${CHROMIUM_PATH:-/usr/bin/chromium}"
   [poppler-utils]="pdftotext pdftoppm pdfinfo"
+  # Debian keeps the server's programs off the PATH, under the version's folder.
+  [postgresql]="/usr/lib/postgresql/*/bin/pg_ctl"
 )
 
 if [ "$#" -gt 0 ]; then
   wanted=("$@")
 else
-  wanted=(chromium poppler-utils)
+  wanted=(chromium poppler-utils postgresql)
 fi
 
 present() {
   local thing
   for thing in $1; do
-    if [[ "$thing" == */* ]]; then
+    if [[ "$thing" == *'*'* ]]; then
+      compgen -G "$thing" >/dev/null || return 1
+    elif [[ "$thing" == */* ]]; then
       [ -x "$thing" ] || return 1
     else
       command -v "$thing" >/dev/null 2>&1 || return 1

@@ -54,7 +54,7 @@ async function paymentProvider(
 async function main() {
   const config = readConfig();
   const logger = createLogger(config.logLevel);
-  const db = openDatabase(config.dbFile);
+  const db = openDatabase(config.database);
   await migrateToLatest(db);
   const seeded = await seedDemoIfEmpty(db, { filesDir: config.filesDir });
   const payments = await paymentProvider(config, logger.child({ part: 'payments stand-in' }));
@@ -98,12 +98,12 @@ async function main() {
   const server = app.listen(config.port, config.host, () => {
     const lines = [
       `Saggar is running at http://localhost:${config.port}`,
-      `Database: ${config.dbFile}${seeded ? ' (demo data seeded)' : ''}`,
+      `Database: ${redactedUrl(config.database, config.database)}${seeded ? ' (demo data seeded)' : ''}`,
       'Demo sign-ins (password for all: ' + demoSignIns.password + '):',
       ...demoSignIns.people.map((p) => `  ${p.email.padEnd(24)} ${p.description}`),
       smtp.local
         ? `Mail: local stand-in at ${smtp.local.url}; what it receives is kept in ${config.mailDir}`
-        : `Mail: sent through ${redactedUrl(smtp.url)}`,
+        : `Mail: sent through ${redactedUrl(smtp.url, 'the configured SMTP_URL')}`,
       payments.local
         ? `Payments: local stand-in at ${payments.local.url} (test payments, no card is charged)`
         : 'Payments: through Stripe',
@@ -130,14 +130,14 @@ async function main() {
   process.on('SIGTERM', stop);
 }
 
-/** An SMTP address for the log, without its password. */
-function redactedUrl(url: string): string {
+/** An address (the mail server's, the database's) for the log, without its password. */
+function redactedUrl(url: string, otherwise: string): string {
   try {
     const parsed = new URL(url);
     if (parsed.password) parsed.password = '***';
     return parsed.toString();
   } catch {
-    return 'the configured SMTP_URL';
+    return otherwise;
   }
 }
 

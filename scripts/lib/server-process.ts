@@ -2,6 +2,8 @@ import { type ChildProcess, spawn } from 'node:child_process';
 import net from 'node:net';
 import path from 'node:path';
 
+import { isPostgresUrl } from '../../server/db/database';
+
 const root = path.resolve(__dirname, '../..');
 
 async function freePort(): Promise<number> {
@@ -25,11 +27,12 @@ export type ServerProcess = {
 
 /**
  * The real server (`server/index.ts`, as `npm start` runs it) in a process of its own, on a free
- * port, over the database file given (seeded with the demo when it is empty): what the browser
- * tests drive, and what the benchmarks load without measuring their own load.
+ * port, over the database given, a SQLite file or a PostgreSQL URL (seeded with the demo when it
+ * is empty): what the browser tests drive, and what the benchmarks load without measuring their
+ * own load.
  */
 export async function startServerProcess(
-  dbFile: string,
+  database: string,
   env: Record<string, string> = {},
 ): Promise<ServerProcess> {
   const port = await freePort();
@@ -42,7 +45,7 @@ export async function startServerProcess(
         ...process.env,
         PORT: String(port),
         HOST: '127.0.0.1',
-        SAGGAR_DB: dbFile,
+        ...(isPostgresUrl(database) ? { SAGGAR_DATABASE_URL: database } : { SAGGAR_DB: database }),
         LOG_LEVEL: 'warn',
         ...env,
       },

@@ -44,10 +44,17 @@ function toApiError(status: number, body: unknown): HttpError {
  * Hands the request to better-auth (its body already parsed and checked by our own middleware)
  * and sends its answer: success as it is, any refusal in the API's one error shape.
  */
-export async function passToAuth({ auth }: AppContext, req: Request, res: Response) {
+export async function passToAuth(
+  { auth }: AppContext,
+  req: Request,
+  res: Response,
+  /** Done before a success is answered, so the client's next request finds it done. */
+  beforeSuccess?: () => Promise<void>,
+) {
   const request = getRequest({ base: `${req.protocol}://${req.get('host')}`, request: req });
   const response = await auth.handler(request);
   if (response.ok) {
+    await beforeSuccess?.();
     await setResponse(res, response);
     return response;
   }

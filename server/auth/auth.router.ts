@@ -44,8 +44,7 @@ export function authRouter(context: AppContext, authenticate: RequestHandler) {
           res.set('Retry-After', String(counted.retryAfterSeconds));
           throw new HttpError('too_many_requests', counted.message);
         }
-        const response = await passToAuth(context, req, res);
-        if (response.ok) await counted.succeeded();
+        await passToAuth(context, req, res, counted.succeeded);
       })
       .post('/sign-out', authenticate, requireSignedIn, signOut, async (req, res) => {
         await passToAuth(context, req, res);

@@ -18,7 +18,7 @@ export type AuthOptions = {
   trustedOrigins: readonly string[];
 };
 
-/** Identity: e-mail and password sign-in and sessions, stored in our SQLite tables. */
+/** Identity: e-mail and password sign-in and sessions, stored in our own tables. */
 export function createAuth({
   db,
   logger,
@@ -32,6 +32,10 @@ export function createAuth({
     secret,
     ...(publicUrl ? { baseURL: publicUrl } : {}),
     trustedOrigins: [...trustedOrigins],
+    // What better-auth calls 'sqlite' is how both of our databases store its fields: booleans as
+    // 0/1, times as ISO-8601 text, no JSON or UUID columns (docs/databases.md). Its queries are
+    // plain SQL, and its schema check reads the tables through Kysely's introspection, which
+    // knows PostgreSQL too; 'postgres' would write true/false and Date values instead.
     database: { db, type: 'sqlite' },
     emailAndPassword: {
       enabled: true,

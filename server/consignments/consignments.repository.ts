@@ -1,5 +1,3 @@
-import { sql } from 'kysely';
-
 import {
   consignmentOutStates,
   type ConsignmentState,
@@ -10,6 +8,7 @@ import { scoped } from '../access/scoped';
 import { type Scope } from '../access/viewer';
 import { type Db } from '../db/database';
 import { type ConsignmentUpdate, type NewConsignmentRow } from '../db/schema/consignments';
+import { matchesLike } from '../db/text-search';
 
 /** Consignments as lists show them, with counts of their pieces, newest first. */
 export async function listConsignmentSummaries(
@@ -174,7 +173,7 @@ export async function listReferencesLike(db: Db, scope: Scope, prefix: string) {
   const rows = await scoped
     .consignments(db, scope)
     .select('consignments.reference')
-    .where(sql<boolean>`consignments.reference like ${`${prefix}%`}`)
+    .where(matchesLike(db, 'consignments.reference', `${prefix}%`))
     .execute();
   return rows.map((r) => r.reference);
 }
@@ -256,7 +255,9 @@ export async function insertHoldingLine(
       insurance_value: line.insuranceValue,
       holds_work: 1,
     })
-    .onConflict((oc) => oc.columns(['work_id', 'holds_work']).doNothing())
+    // Any clash (another line holding the work, or this consignment's earlier line of it) is an
+    // answer, not an error: on PostgreSQL an error would end the transaction it is in.
+    .onConflict((oc) => oc.doNothing())
     .returning('id')
     .executeTakeFirst();
   return inserted?.id;

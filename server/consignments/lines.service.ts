@@ -7,7 +7,6 @@ import { type WorkStatus } from '@/shared/schemas/work';
 import { type Scope } from '../access/viewer';
 import { writeAudit } from '../audit/audit-log.repository';
 import { type Db } from '../db/database';
-import { isUniqueViolation } from '../db/errors';
 import { HttpError, notFound } from '../http/http-error';
 import { findWorkRow } from '../works/works.repository';
 import {
@@ -88,18 +87,13 @@ export async function addLine(
     const terms = termsOf(row);
     const price = input.listPrice ?? { amount: work.retail_price, currency: work.currency };
     checkCurrency(terms, price);
-    let lineId: number | undefined;
-    try {
-      lineId = await insertHoldingLine(trx, scope, {
-        consignmentId,
-        workId: work.id,
-        currency: price.currency,
-        listPrice: price.amount,
-        insuranceValue: insuranceValue(terms, price).amount,
-      });
-    } catch (err) {
-      if (!isUniqueViolation(err)) throw err;
-    }
+    const lineId = await insertHoldingLine(trx, scope, {
+      consignmentId,
+      workId: work.id,
+      currency: price.currency,
+      listPrice: price.amount,
+      insuranceValue: insuranceValue(terms, price).amount,
+    });
     if (lineId === undefined) {
       throw await refusal(trx, scope, consignmentId, work.id, work.stock_number);
     }

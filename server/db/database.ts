@@ -2,7 +2,8 @@ import fs from 'node:fs';
 import path from 'node:path';
 
 import SQLite from 'better-sqlite3';
-import { Kysely, type SqliteDatabase, SqliteDialect } from 'kysely';
+import { Kysely, PostgresDialect, type SqliteDatabase, SqliteDialect } from 'kysely';
+import pg from 'pg';
 
 import { type Database } from './schema';
 
@@ -34,11 +35,43 @@ function withStatementCache(sqlite: SQLite.Database, size = 500): SqliteDatabase
   };
 }
 
+/** Whether `location` names a PostgreSQL database (a URL) rather than a SQLite file. */
+export function isPostgresUrl(location: string): boolean {
+  return /^postgres(ql)?:\/\//.test(location);
+}
+
+/**
+ * Opens the database at `location`: a `postgres://` URL (SAGGAR_DATABASE_URL), or else a SQLite
+ * file (or `:memory:`).
+ */
+export function openDatabase(location: string): Db {
+  return isPostgresUrl(location) ? openPostgres(location) : openSqlite(location);
+}
+
+/**
+ * A pool of PostgreSQL connections. Counts and sums come back as int8, which pg hands over as
+ * strings (to be safe past 2^53); ours are counts and minor units far below that, so they are
+ * numbers, as SQLite gives them.
+ */
+function openPostgres(url: string): Db {
+  const types = {
+    getTypeParser: ((oid: number, format?: 'text' | 'binary') =>
+      oid === pg.types.builtins.INT8 || oid === pg.types.builtins.NUMERIC
+        ? Number
+        : pg.types.getTypeParser(oid, format)) as typeof pg.types.getTypeParser,
+  };
+  const pool = new pg.Pool({ connectionString: url, max: 10, types });
+  // A connection lost while idle leaves the pool by itself, and the next query opens another;
+  // unheard, the pool's error would end the process.
+  pool.on('error', () => {});
+  return new Kysely<Database>({ dialect: new PostgresDialect({ pool }) });
+}
+
 /**
  * Opens the SQLite file (or `:memory:`) with WAL, foreign keys and a busy timeout, so that a
  * second process (the seed command, a backup) waits instead of failing.
  */
-export function openDatabase(file: string): Db {
+function openSqlite(file: string): Db {
   if (file !== ':memory:') fs.mkdirSync(path.dirname(path.resolve(file)), { recursive: true });
   const sqlite = new SQLite(file);
   sqlite.pragma('journal_mode = WAL');

@@ -5,6 +5,7 @@ import { type OutboxState, type OutgoingMail, outgoingMailSchema } from '@/share
 import { scoped } from '../access/scoped';
 import { type Scope } from '../access/viewer';
 import { type Db } from '../db/database';
+import { lockedForUpdate } from '../db/dialect';
 import { type OutboxRow } from '../db/schema/outbox';
 import { type OutboxMessageColumns, type OutboxSummaryColumns } from './outbox.mapper';
 import { nudgeOutbox } from './outbox-nudge';
@@ -45,7 +46,8 @@ export async function enqueueMail(
 
 /**
  * A message of `kind` to `to` still held back (queued, never tried, unclaimed and not yet due):
- * one that news of the same kind can still be added to before it goes.
+ * one that news of the same kind can still be added to before it goes. Locked until the
+ * transaction ends (on PostgreSQL), so a worker cannot claim and word it while news joins it.
  */
 export async function findHeldMail(
   db: Db,
@@ -65,6 +67,7 @@ export async function findHeldMail(
     .where('claim_token', 'is', null)
     .where('next_attempt_at', '>', now.toISOString())
     .orderBy('id')
+    .$call(lockedForUpdate(db))
     .executeTakeFirst();
 }
 

@@ -7,6 +7,7 @@ import { type Db } from '../db/database';
 import { type MailComposer } from '../mail/composers';
 import { enqueueMail, findHeldMail } from '../mail/outbox.repository';
 import { saleNoticeMail } from '../mail/templates/sale-notice';
+import { lockStudio } from '../studio/studio.repository';
 import { getStudio } from '../studio/studio.service';
 import {
   findOwnerAddress,
@@ -93,6 +94,7 @@ export async function noteSalesForMaker(
 ): Promise<void> {
   const to = await findOwnerAddress(trx, scope);
   if (!to) return;
+  await lockStudio(trx, scope);
   const held = await findHeldMail(trx, scope.studioId, 'sale', to, now);
   if (held) {
     await setSaleMail(trx, scope, lineIds, held.id);

@@ -167,7 +167,10 @@ async function recordSalesIn(
     throw new HttpError('invalid_request', 'Some fields need attention.', issues);
 
   const at = new Date().toISOString();
-  for (const { line, sale, discount, discountReason, split } of checked) {
+  // In the order of the lines, whatever the receipt's: two receipts sharing pieces then wait for
+  // each other on PostgreSQL instead of each holding a piece the other needs.
+  const inLineOrder = [...checked].sort((a, b) => a.line.id - b.line.id);
+  for (const { line, sale, discount, discountReason, split } of inLineOrder) {
     const sold = await markLineSold(trx, scope, line.id, {
       soldOn: sale.soldOn,
       salePrice: sale.salePrice.amount,

@@ -1,13 +1,13 @@
-import { sql } from 'kysely';
-
 import { scoped } from '../access/scoped';
 import { type Scope } from '../access/viewer';
 import { type Db } from '../db/database';
+import { lockedForUpdate } from '../db/dialect';
 import {
   type NewStatementRow,
   type StatementState,
   type StatementUpdate,
 } from '../db/schema/statements';
+import { matchesLike } from '../db/text-search';
 
 /** One statement the scope may see, with its venue and consignment. */
 export async function findStatementRow(db: Db, scope: Scope, id: number) {
@@ -49,7 +49,7 @@ export async function listStatementReferencesLike(db: Db, scope: Scope, prefix: 
   const rows = await scoped
     .statements(db, scope)
     .select('statements.reference')
-    .where(sql<boolean>`statements.reference like ${`${prefix}%`}`)
+    .where(matchesLike(db, 'statements.reference', `${prefix}%`))
     .execute();
   return rows.map((r) => r.reference);
 }
@@ -274,4 +274,18 @@ export async function listStatementStatesOf(db: Db, scope: Scope, consignmentId:
     .where('statements.state', '!=', 'void')
     .execute();
   return rows.map((r) => r.state);
+}
+
+/**
+ * Locks the statement's row until the transaction ends (on PostgreSQL): issuing it, and payments
+ * and explanations that may settle it, each work out its balance from what the one before left.
+ */
+export async function lockStatement(db: Db, scope: Scope, id: number): Promise<void> {
+  await db
+    .selectFrom('statements')
+    .select('statements.id')
+    .where('statements.studio_id', '=', scope.studioId)
+    .where('statements.id', '=', id)
+    .$call(lockedForUpdate(db))
+    .execute();
 }

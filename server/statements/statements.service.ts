@@ -31,6 +31,7 @@ import {
   listStatementReferencesLike,
   listStatementRows,
   listUnstatedSales,
+  lockStatement,
   type SaleRow,
   type StatementRow,
   updateStatementIn,
@@ -296,6 +297,7 @@ export async function issueStatement(
   { appUrl }: { appUrl: string },
 ): Promise<Statement> {
   await db.transaction().execute(async (trx) => {
+    await lockStatement(trx, scope, id);
     const draft = await getStatement(trx, scope, id);
     if (draft.state !== 'draft') {
       throw new HttpError('conflict', `${draft.reference} is already ${draft.state}.`);
@@ -434,6 +436,7 @@ export async function recordPayment(
   input: PaymentCreate & { reference?: string | null },
 ): Promise<Statement> {
   await db.transaction().execute(async (trx) => {
+    await lockStatement(trx, scope, id);
     const statement = await issuedStatement(trx, scope, id, 'No payment can be recorded against');
     if (input.amount.currency !== statement.currency) {
       throw new HttpError('invalid_request', 'Some fields need attention.', [
@@ -470,6 +473,7 @@ export async function recordOnlinePayment(
   payment: { amount: Money; receivedOn: string; providerPaymentId: string },
 ): Promise<OnlinePaymentOutcome> {
   return db.transaction().execute(async (trx): Promise<OnlinePaymentOutcome> => {
+    await lockStatement(trx, scope, id);
     const statement = await getStatement(trx, scope, id);
     if (statement.state !== 'issued' && statement.state !== 'settled') {
       return { outcome: 'refused', reason: `${statement.reference} is ${statement.state}` };
@@ -500,6 +504,7 @@ export async function explainDifference(
   input: AdjustmentCreate & { note?: string | null },
 ): Promise<Statement> {
   await db.transaction().execute(async (trx) => {
+    await lockStatement(trx, scope, id);
     const statement = await issuedStatement(trx, scope, id, 'No difference can be explained on');
     if (input.amount.currency !== statement.currency) {
       throw new HttpError('invalid_request', 'Some fields need attention.', [

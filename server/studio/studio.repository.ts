@@ -1,6 +1,7 @@
 import { scoped } from '../access/scoped';
 import { type Scope } from '../access/viewer';
 import { type Db } from '../db/database';
+import { lockedForUpdate } from '../db/dialect';
 import { type StudioRow } from '../db/schema/studios';
 
 export type Studio = Pick<
@@ -43,5 +44,19 @@ export async function updateStudio(
     .updateTable('studios')
     .set({ ...columns, updated_at: new Date().toISOString() })
     .where('studios.id', '=', scope.studioId)
+    .execute();
+}
+
+/**
+ * Locks the studio's row until the transaction ends (on PostgreSQL; SQLite runs one writer at a
+ * time anyway), for what the studio hands out one at a time: the next stock number, and the sale
+ * e-mail held for the maker, which racing sales would otherwise each start anew.
+ */
+export async function lockStudio(db: Db, scope: Scope): Promise<void> {
+  await db
+    .selectFrom('studios')
+    .select('studios.id')
+    .where('studios.id', '=', scope.studioId)
+    .$call(lockedForUpdate(db))
     .execute();
 }

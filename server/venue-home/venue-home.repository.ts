@@ -59,8 +59,8 @@ export async function listVenuePieces(db: Db, scope: Scope, search: string) {
   for (const word of search.split(/\s+/).filter(Boolean)) {
     q = q.where((eb) =>
       eb.or([
-        containsWord('works.stock_number', word),
-        containsWord('works.title', word),
+        containsWord(db, 'works.stock_number', word),
+        containsWord(db, 'works.title', word),
       ] as Expression<SqlBool>[]),
     );
   }

@@ -3,6 +3,7 @@ import { sql } from 'kysely';
 import { scoped } from '../access/scoped';
 import { type Scope } from '../access/viewer';
 import { type Db } from '../db/database';
+import { ignoringCase } from '../db/dialect';
 import { type NewVenueRow } from '../db/schema/venues';
 import { type VenueColumns } from './venues.mapper';
 
@@ -35,7 +36,7 @@ export async function listVenueRows(
   if (archived === 'exclude') q = q.where('venues.archived_at', 'is', null);
   if (archived === 'only') q = q.where('venues.archived_at', 'is not', null);
   return q
-    .orderBy(sql`venues.name collate nocase`)
+    .orderBy(ignoringCase(db, sql.ref('venues.name')))
     .orderBy('venues.id')
     .execute();
 }
@@ -83,7 +84,7 @@ export async function listVenueStaff(db: Db, scope: Scope, venueId: number) {
     .select(['users.id as userId', 'users.name', 'users.email'])
     .where('memberships.role', '=', 'gallery')
     .where('memberships.venue_id', '=', venueId)
-    .orderBy(sql`users.name collate nocase`)
+    .orderBy(ignoringCase(db, sql.ref('users.name')))
     .execute();
 }
 

@@ -5,8 +5,9 @@ import { type WorkSort, type WorkStatus, workStatuses } from '@/shared/schemas/w
 import { scoped } from '../access/scoped';
 import { type Scope } from '../access/viewer';
 import { type Db } from '../db/database';
+import { ignoringCase } from '../db/dialect';
 import { type NewWorkRow } from '../db/schema/works';
-import { containsWord } from '../db/text-search';
+import { containsWord, matchesLike } from '../db/text-search';
 import { latestLineId, statusFromLatestLine } from './work-status';
 import { toPhoto, type toWorkColumns, type WorkListRow } from './works.mapper';
 
@@ -63,7 +64,7 @@ const searchColumns = [
   'works.glaze',
 ] as const;
 
-function filtered(query: WorksWithPlace, filter: WorkFilter): WorksWithPlace {
+function filtered(db: Db, query: WorksWithPlace, filter: WorkFilter): WorksWithPlace {
   let q = query;
   if (filter.archived === 'exclude') q = q.where('works.archived_at', 'is', null);
   if (filter.archived === 'only') q = q.where('works.archived_at', 'is not', null);
@@ -74,17 +75,17 @@ function filtered(query: WorksWithPlace, filter: WorkFilter): WorksWithPlace {
   // Every word must appear in one of the text columns.
   for (const word of (filter.search ?? '').split(/\s+/).filter(Boolean)) {
     q = q.where((eb) =>
-      eb.or(searchColumns.map((column) => containsWord(column, word)) as Expression<SqlBool>[]),
+      eb.or(searchColumns.map((column) => containsWord(db, column, word)) as Expression<SqlBool>[]),
     );
   }
   return q;
 }
 
-function sorted(query: WorksWithPlace, sort: WorkSort): WorksWithPlace {
+function sorted(db: Db, query: WorksWithPlace, sort: WorkSort): WorksWithPlace {
   const direction = sort.startsWith('-') ? 'desc' : 'asc';
   const key = sort.replace(/^-/, '') as 'stockNumber' | 'title' | 'year' | 'price' | 'status';
   let q = query;
-  if (key === 'title') q = q.orderBy(sql`works.title collate nocase`, direction);
+  if (key === 'title') q = q.orderBy(ignoringCase(db, sql.ref('works.title')), direction);
   if (key === 'year') q = q.orderBy('works.year', (o) => o[direction]().nullsLast());
   if (key === 'price') q = q.orderBy('works.retail_price', direction);
   if (key === 'status') q = q.orderBy(statusRank, direction);
@@ -137,13 +138,13 @@ export async function listWorkRows(
   sort: WorkSort,
   page?: { page: number; pageSize: number },
 ): Promise<WorkListRow[]> {
-  let q = selectWork(sorted(filtered(worksWithPlace(db, scope), filter), sort));
+  let q = selectWork(sorted(db, filtered(db, worksWithPlace(db, scope), filter), sort));
   if (page) q = q.limit(page.pageSize).offset((page.page - 1) * page.pageSize);
   return q.execute();
 }
 
 export async function countWorks(db: Db, scope: Scope, filter: WorkFilter): Promise<number> {
-  const row = await filtered(worksWithPlace(db, scope), filter)
+  const row = await filtered(db, worksWithPlace(db, scope), filter)
     .select((eb) => eb.fn.countAll<number>().as('n'))
     .executeTakeFirstOrThrow();
   return Number(row.n);
@@ -187,10 +188,11 @@ export async function listFacets(db: Db, scope: Scope) {
     const rows = await scoped
       .works(db, scope)
       .select(`${column} as value`)
-      .distinct()
       .where(column, 'is not', null)
       .where('works.archived_at', 'is', null)
-      .orderBy(sql`${sql.ref(column)} collate nocase`)
+      // Grouped rather than DISTINCT: PostgreSQL sorts a DISTINCT only by what it selects.
+      .groupBy(column)
+      .orderBy(ignoringCase(db, sql.ref(column)))
       .execute();
     return rows.map((r) => r.value).filter((v): v is string => v !== null);
   };
@@ -198,7 +200,7 @@ export async function listFacets(db: Db, scope: Scope) {
     .venues(db, scope)
     .select(['venues.id', 'venues.name'])
     .where('venues.archived_at', 'is', null)
-    .orderBy(sql`venues.name collate nocase`)
+    .orderBy(ignoringCase(db, sql.ref('venues.name')))
     .execute();
   return {
     series: await distinct('works.series'),
@@ -212,7 +214,7 @@ export async function listStockNumbersLike(db: Db, scope: Scope, like: string) {
   const rows = await scoped
     .works(db, scope)
     .select('works.stock_number')
-    .where(sql<SqlBool>`works.stock_number like ${like} escape '\\'`)
+    .where(matchesLike(db, 'works.stock_number', like))
     .execute();
   return rows.map((r) => r.stock_number);
 }

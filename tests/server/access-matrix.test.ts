@@ -23,6 +23,7 @@ import { picture } from './helpers/pictures';
 import { protectedRoutes, publicRoutes } from './helpers/routes';
 import { insertWork } from './helpers/studio-fixture';
 import { addPerson, addVenue, createTestApp, password, signIn } from './helpers/test-app';
+import { copyTestDatabase, releaseTestDatabase, testDatabaseKind } from './helpers/test-database';
 
 /**
  * Every route of the product against every kind of person, each called with the real ids of one
@@ -235,8 +236,8 @@ async function buildFixture(dir: string) {
     ),
   ) as Record<Exclude<Person, 'none'>, number>;
 
-  // Everything in the main file, so a copy of the folder is the whole fixture.
-  await sql`pragma wal_checkpoint(truncate)`.execute(f.db);
+  // On SQLite, everything in the main file, so a copy of the folder is the whole fixture.
+  if (testDatabaseKind === 'sqlite') await sql`pragma wal_checkpoint(truncate)`.execute(f.db);
   await f.db.destroy();
   return {
     cookies,
@@ -797,6 +798,7 @@ let payments: Awaited<ReturnType<typeof startTestPayments>>;
 async function freshApp() {
   const dir = path.join(root, randomUUID());
   fs.cpSync(base, dir, { recursive: true });
+  await copyTestDatabase(path.join(base, 'saggar.db'), path.join(dir, 'saggar.db'));
   const ctx = await createTestApp({
     dbFile: path.join(dir, 'saggar.db'),
     filesDir: path.join(dir, 'files'),
@@ -806,6 +808,7 @@ async function freshApp() {
     app: ctx.app,
     close: async () => {
       await ctx.db.destroy();
+      releaseTestDatabase(path.join(dir, 'saggar.db'));
       fs.rmSync(dir, { recursive: true, force: true });
     },
   };

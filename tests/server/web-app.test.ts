@@ -8,9 +8,9 @@ import request from 'supertest';
 
 import { createApp } from '@/server/app';
 import { createContext } from '@/server/context';
-import { openDatabase } from '@/server/db/database';
-import { migrateToLatest } from '@/server/db/migrate';
 import { webApp } from '@/server/http/web-app';
+
+import { openTestDatabase } from './helpers/test-database';
 
 const bundle = '/_expo/static/js/web/entry-0123456789abcdef0123456789abcdef.js';
 const font = '/assets/fonts/Body-Regular.0123456789abcdef0123456789abcdef.woff2';
@@ -35,8 +35,7 @@ async function appOver(files: 'built' | 'empty' = 'built') {
     fs.writeFileSync(path.join(root, font), 'wOF2');
     fs.writeFileSync(path.join(root, 'metadata.json'), '{}');
   }
-  const db = openDatabase(':memory:');
-  await migrateToLatest(db);
+  const db = await openTestDatabase();
   return createApp(
     createContext({
       db,

@@ -1,15 +1,17 @@
 import { type Kysely, sql } from 'kysely';
 
-// Frozen: this migration takes Kysely<any> and imports no app code. Change the schema with a new
-// numbered migration, never by editing this one.
+import { autoId, nowDefault } from '../dialect';
 
-const now = sql`(strftime('%Y-%m-%dT%H:%M:%fZ', 'now'))`;
+// Frozen: this migration takes Kysely<any> and imports no app code, only the dialect's helpers.
+// Change the schema with a new numbered migration, never by editing this one. (It was written for
+// SQLite alone; the helpers give PostgreSQL the same tables and leave SQLite's as they were.)
 
 function oneOf(column: string, values: readonly string[]) {
   return sql.raw(`${column} in (${values.map((v) => `'${v}'`).join(', ')})`);
 }
 
 export async function up(db: Kysely<any>): Promise<void> {
+  const now = nowDefault(db);
   // Identity tables, in the shape better-auth expects (its fields mapped to snake_case).
   await db.schema
     .createTable('users')
@@ -21,22 +23,6 @@ export async function up(db: Kysely<any>): Promise<void> {
     .addColumn('created_at', 'text', (c) => c.notNull().defaultTo(now))
     .addColumn('updated_at', 'text', (c) => c.notNull().defaultTo(now))
     .execute();
-
-  await db.schema
-    .createTable('sessions')
-    .addColumn('id', 'text', (c) => c.primaryKey())
-    .addColumn('user_id', 'text', (c) => c.notNull().references('users.id').onDelete('cascade'))
-    .addColumn('token', 'text', (c) => c.notNull().unique())
-    .addColumn('expires_at', 'text', (c) => c.notNull())
-    .addColumn('ip_address', 'text')
-    .addColumn('user_agent', 'text')
-    .addColumn('active_membership_id', 'integer', (c) =>
-      c.references('memberships.id').onDelete('set null'),
-    )
-    .addColumn('created_at', 'text', (c) => c.notNull().defaultTo(now))
-    .addColumn('updated_at', 'text', (c) => c.notNull().defaultTo(now))
-    .execute();
-  await db.schema.createIndex('sessions_user_id').on('sessions').column('user_id').execute();
 
   await db.schema
     .createTable('accounts')
@@ -68,7 +54,7 @@ export async function up(db: Kysely<any>): Promise<void> {
 
   await db.schema
     .createTable('studios')
-    .addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
+    .addColumn('id', 'integer', autoId(db))
     .addColumn('name', 'text', (c) => c.notNull())
     .addColumn('country', 'text', (c) => c.notNull().defaultTo('GB'))
     .addColumn('currency', 'text', (c) => c.notNull().defaultTo('GBP'))
@@ -84,7 +70,7 @@ export async function up(db: Kysely<any>): Promise<void> {
 
   await db.schema
     .createTable('venues')
-    .addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
+    .addColumn('id', 'integer', autoId(db))
     .addColumn('studio_id', 'integer', (c) => c.notNull().references('studios.id'))
     .addColumn('name', 'text', (c) => c.notNull())
     .addColumn('kind', 'text', (c) =>
@@ -109,7 +95,7 @@ export async function up(db: Kysely<any>): Promise<void> {
 
   await db.schema
     .createTable('memberships')
-    .addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
+    .addColumn('id', 'integer', autoId(db))
     .addColumn('user_id', 'text', (c) => c.notNull().references('users.id').onDelete('cascade'))
     .addColumn('studio_id', 'integer', (c) => c.notNull().references('studios.id'))
     .addColumn('role', 'text', (c) =>
@@ -125,9 +111,27 @@ export async function up(db: Kysely<any>): Promise<void> {
     )
     .execute();
 
+  // After memberships, which a session's active membership refers to (PostgreSQL checks that a
+  // referenced table exists).
+  await db.schema
+    .createTable('sessions')
+    .addColumn('id', 'text', (c) => c.primaryKey())
+    .addColumn('user_id', 'text', (c) => c.notNull().references('users.id').onDelete('cascade'))
+    .addColumn('token', 'text', (c) => c.notNull().unique())
+    .addColumn('expires_at', 'text', (c) => c.notNull())
+    .addColumn('ip_address', 'text')
+    .addColumn('user_agent', 'text')
+    .addColumn('active_membership_id', 'integer', (c) =>
+      c.references('memberships.id').onDelete('set null'),
+    )
+    .addColumn('created_at', 'text', (c) => c.notNull().defaultTo(now))
+    .addColumn('updated_at', 'text', (c) => c.notNull().defaultTo(now))
+    .execute();
+  await db.schema.createIndex('sessions_user_id').on('sessions').column('user_id').execute();
+
   await db.schema
     .createTable('invitations')
-    .addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
+    .addColumn('id', 'integer', autoId(db))
     .addColumn('studio_id', 'integer', (c) => c.notNull().references('studios.id'))
     .addColumn('email', 'text', (c) => c.notNull())
     .addColumn('role', 'text', (c) =>
@@ -147,7 +151,7 @@ export async function up(db: Kysely<any>): Promise<void> {
 
   await db.schema
     .createTable('files')
-    .addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
+    .addColumn('id', 'integer', autoId(db))
     .addColumn('studio_id', 'integer', (c) => c.notNull().references('studios.id'))
     .addColumn('sha256', 'text', (c) => c.notNull())
     .addColumn('mime_type', 'text', (c) => c.notNull())
@@ -162,7 +166,7 @@ export async function up(db: Kysely<any>): Promise<void> {
 
   await db.schema
     .createTable('works')
-    .addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
+    .addColumn('id', 'integer', autoId(db))
     .addColumn('studio_id', 'integer', (c) => c.notNull().references('studios.id'))
     .addColumn('stock_number', 'text', (c) => c.notNull())
     .addColumn('title', 'text', (c) => c.notNull())
@@ -197,7 +201,7 @@ export async function up(db: Kysely<any>): Promise<void> {
 
   await db.schema
     .createTable('work_photos')
-    .addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
+    .addColumn('id', 'integer', autoId(db))
     .addColumn('work_id', 'integer', (c) => c.notNull().references('works.id').onDelete('cascade'))
     .addColumn('file_id', 'integer', (c) => c.notNull().references('files.id'))
     .addColumn('position', 'integer', (c) => c.notNull())
@@ -208,7 +212,7 @@ export async function up(db: Kysely<any>): Promise<void> {
 
   await db.schema
     .createTable('consignments')
-    .addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
+    .addColumn('id', 'integer', autoId(db))
     .addColumn('studio_id', 'integer', (c) => c.notNull().references('studios.id'))
     .addColumn('venue_id', 'integer', (c) => c.notNull().references('venues.id'))
     .addColumn('reference', 'text', (c) => c.notNull())
@@ -253,7 +257,7 @@ export async function up(db: Kysely<any>): Promise<void> {
 
   await db.schema
     .createTable('consignment_lines')
-    .addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
+    .addColumn('id', 'integer', autoId(db))
     .addColumn('studio_id', 'integer', (c) => c.notNull().references('studios.id'))
     .addColumn('consignment_id', 'integer', (c) =>
       c.notNull().references('consignments.id').onDelete('cascade'),
@@ -290,7 +294,7 @@ export async function up(db: Kysely<any>): Promise<void> {
 
   await db.schema
     .createTable('condition_reports')
-    .addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
+    .addColumn('id', 'integer', autoId(db))
     .addColumn('studio_id', 'integer', (c) => c.notNull().references('studios.id'))
     .addColumn('work_id', 'integer', (c) => c.notNull().references('works.id'))
     .addColumn('consignment_line_id', 'integer', (c) =>
@@ -313,7 +317,7 @@ export async function up(db: Kysely<any>): Promise<void> {
 
   await db.schema
     .createTable('condition_findings')
-    .addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
+    .addColumn('id', 'integer', autoId(db))
     .addColumn('report_id', 'integer', (c) =>
       c.notNull().references('condition_reports.id').onDelete('cascade'),
     )
@@ -345,7 +349,7 @@ export async function up(db: Kysely<any>): Promise<void> {
 
   await db.schema
     .createTable('statements')
-    .addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
+    .addColumn('id', 'integer', autoId(db))
     .addColumn('studio_id', 'integer', (c) => c.notNull().references('studios.id'))
     .addColumn('venue_id', 'integer', (c) => c.notNull().references('venues.id'))
     .addColumn('consignment_id', 'integer', (c) => c.references('consignments.id'))
@@ -388,7 +392,7 @@ export async function up(db: Kysely<any>): Promise<void> {
 
   await db.schema
     .createTable('payments')
-    .addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
+    .addColumn('id', 'integer', autoId(db))
     .addColumn('studio_id', 'integer', (c) => c.notNull().references('studios.id'))
     .addColumn('venue_id', 'integer', (c) => c.notNull().references('venues.id'))
     .addColumn('statement_id', 'integer', (c) => c.references('statements.id'))
@@ -413,7 +417,7 @@ export async function up(db: Kysely<any>): Promise<void> {
 
   await db.schema
     .createTable('outbox')
-    .addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
+    .addColumn('id', 'integer', autoId(db))
     .addColumn('studio_id', 'integer', (c) => c.references('studios.id'))
     .addColumn('to_address', 'text', (c) => c.notNull())
     .addColumn('subject', 'text', (c) => c.notNull())
@@ -435,7 +439,7 @@ export async function up(db: Kysely<any>): Promise<void> {
 
   await db.schema
     .createTable('audit_log')
-    .addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
+    .addColumn('id', 'integer', autoId(db))
     .addColumn('studio_id', 'integer', (c) => c.notNull().references('studios.id'))
     .addColumn('user_id', 'text', (c) => c.references('users.id').onDelete('set null'))
     .addColumn('action', 'text', (c) => c.notNull())

@@ -1,6 +1,8 @@
 import { type Kysely, sql } from 'kysely';
 
-// Frozen: this migration takes Kysely<any> and imports no app code.
+import { autoId } from '../dialect';
+
+// Frozen: this migration takes Kysely<any> and imports no app code, only the dialect's helpers.
 
 /**
  * What closing a show and accounting for it needs beyond the first schema: a statement's frozen VAT
@@ -17,7 +19,7 @@ export async function up(db: Kysely<any>): Promise<void> {
 
   await db.schema
     .createTable('statement_adjustments')
-    .addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
+    .addColumn('id', 'integer', autoId(db))
     .addColumn('studio_id', 'integer', (c) => c.notNull().references('studios.id'))
     .addColumn('statement_id', 'integer', (c) =>
       c.notNull().references('statements.id').onDelete('cascade'),

@@ -1,6 +1,8 @@
 import { type Kysely } from 'kysely';
 
-// Frozen: this migration takes Kysely<any> and imports no app code.
+import { autoId } from '../dialect';
+
+// Frozen: this migration takes Kysely<any> and imports no app code, only the dialect's helpers.
 
 /**
  * A studio's private calendar address: only a hash of its token is kept, so the database alone
@@ -9,7 +11,7 @@ import { type Kysely } from 'kysely';
 export async function up(db: Kysely<any>): Promise<void> {
   await db.schema
     .createTable('calendar_feeds')
-    .addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
+    .addColumn('id', 'integer', autoId(db))
     .addColumn('studio_id', 'integer', (c) => c.notNull().references('studios.id'))
     .addColumn('token_hash', 'text', (c) => c.notNull().unique())
     .addColumn('created_by', 'text', (c) => c.references('users.id').onDelete('set null'))

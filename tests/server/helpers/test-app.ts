@@ -8,19 +8,20 @@ import request from 'supertest';
 import { createApp } from '@/server/app';
 import { createUserWithPassword } from '@/server/auth/passwords';
 import { type AppContext, createContext } from '@/server/context';
-import { openDatabase } from '@/server/db/database';
-import { migrateToLatest } from '@/server/db/migrate';
 import { addMembership } from '@/server/memberships/memberships.repository';
 import { type Role } from '@/shared/schemas/membership';
 import { defaultTerms } from '@/shared/schemas/terms';
+
+import { openTestDatabase } from './test-database';
 
 type App = Parameters<typeof request>[0];
 
 export const password = 'correct horse battery staple';
 
 /**
- * The real app over a fresh in-memory database migrated to latest, or over `dbFile` (already
- * migrated by a first app, for several apps sharing one database as several processes would).
+ * The real app over a fresh database migrated to latest (in-memory SQLite, or PostgreSQL under
+ * `npm run test:pg`), or over the one every app given the same `dbFile` shares, as several
+ * processes would.
  */
 export async function createTestApp(
   options: Partial<
@@ -37,9 +38,8 @@ export async function createTestApp(
     >
   > & { publicUrl?: string; dbFile?: string } = {},
 ) {
-  const { dbFile = ':memory:', ...contextOptions } = options;
-  const db = openDatabase(dbFile);
-  await migrateToLatest(db);
+  const { dbFile, ...contextOptions } = options;
+  const db = await openTestDatabase(dbFile);
   const context = createContext({
     db,
     logger: pino({ level: 'silent' }),

@@ -1,14 +1,15 @@
 import { type Kysely, Migrator } from 'kysely';
 
-import { openDatabase } from '@/server/db/database';
 import { migrations } from '@/server/db/migrations';
+
+import { openEmptyTestDatabase } from '../helpers/test-database';
 
 const migrator = (db: Kysely<any>) =>
   new Migrator({ db, provider: { getMigrations: async () => migrations } });
 
 describe('migration 004-outbox-delivery', () => {
   it('keeps messages written before it valid, queued ones due when they were written', async () => {
-    const db = openDatabase(':memory:') as unknown as Kysely<any>;
+    const db = await openEmptyTestDatabase();
     await migrator(db).migrateTo('002-sign-in-limits');
     await db
       .insertInto('outbox')
@@ -67,7 +68,7 @@ describe('migration 004-outbox-delivery', () => {
   });
 
   it('can be undone and done again', async () => {
-    const db = openDatabase(':memory:') as unknown as Kysely<any>;
+    const db = await openEmptyTestDatabase();
     await migrator(db).migrateToLatest();
     expect((await migrator(db).migrateTo('002-sign-in-limits')).error).toBeUndefined();
     expect((await migrator(db).migrateToLatest()).error).toBeUndefined();

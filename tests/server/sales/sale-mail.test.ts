@@ -1,4 +1,3 @@
-import { sql } from 'kysely';
 import { simpleParser } from 'mailparser';
 import sharp from 'sharp';
 
@@ -19,6 +18,7 @@ import {
   uploadWorkPhoto,
 } from '../helpers/sales-fixture';
 import { startTestSmtp, type TestSmtp } from '../helpers/smtp';
+import { addTestTrigger, dropTestTrigger } from '../helpers/test-triggers';
 
 let smtp: TestSmtp;
 beforeEach(async () => {
@@ -82,9 +82,13 @@ describe('the maker’s sale e-mail', () => {
     expect(await saleMails(f)).toEqual([]);
 
     // The database refuses the very last write of the sale, after the e-mail was written.
-    await sql`create trigger refuse_sale_mail before update of sale_mail_id on consignment_lines
-      when new.sale_mail_id is not null
-      begin select raise(abort, 'refused by the test'); end`.execute(f.db);
+    await addTestTrigger(f.db, {
+      name: 'refuse_sale_mail',
+      table: 'consignment_lines',
+      event: 'update of sale_mail_id',
+      when: 'new.sale_mail_id is not null',
+      then: { refuse: 'refused by the test' },
+    });
     const failed = await sell(f, 'gallery', f.lines.moonJar, 10_000);
     expect(failed.status).toBe(500);
     expect(failed.body).toEqual({
@@ -93,7 +97,7 @@ describe('the maker’s sale e-mail', () => {
     expect(await saleMails(f)).toEqual([]);
     expect((await lineRow(f, f.lines.moonJar)).state).toBe('consigned');
     expect(await auditOf(f, f.lines.moonJar)).toEqual([]);
-    await sql`drop trigger refuse_sale_mail`.execute(f.db);
+    await dropTestTrigger(f.db, 'refuse_sale_mail', 'consignment_lines');
     expect((await sell(f, 'gallery', f.lines.moonJar, 10_000)).status).toBe(201);
     expect(await saleMails(f)).toHaveLength(1);
   });

@@ -1,9 +1,9 @@
-import { sql } from 'kysely';
 import request from 'supertest';
 
 import { maxImportRows } from '@/shared/schemas/work-import';
 
 import { type Fixture, insertWork, studioFixture } from '../helpers/studio-fixture';
+import { addTestTrigger } from '../helpers/test-triggers';
 
 const as = async (f: Fixture, who: Parameters<Fixture['cookie']>[0] = 'owner') => ({
   Cookie: await f.cookie(who),
@@ -224,9 +224,17 @@ describe('POST /api/works/import with heavy or hostile files', () => {
   it('reports a row whose stock number is taken between the check and the insert', async () => {
     const f = await studioFixture();
     // When "First" goes in, the trigger takes "CLASH-2" in its place, as a racing request would.
-    await sql`create trigger take_clash before insert on works when new.title = 'First'
-      begin insert into works (studio_id, stock_number, title, retail_price, currency)
-      values (new.studio_id, 'CLASH-2', 'Raced in', 1, 'GBP'); end`.execute(f.db);
+    await addTestTrigger(f.db, {
+      name: 'take_clash',
+      table: 'works',
+      event: 'insert',
+      when: "new.title = 'First'",
+      then: {
+        run:
+          'insert into works (studio_id, stock_number, title, retail_price, currency) ' +
+          "values (new.studio_id, 'CLASH-2', 'Raced in', 1, 'GBP')",
+      },
+    });
     const res = await commit(f, 'Stock number,Title,Price\nCLASH-1,First,10\nCLASH-2,Second,11\n');
     expect(res.status).toBe(200);
     const taken = {

@@ -4,6 +4,7 @@ import request from 'supertest';
 import { importColumnLabels, importColumns } from '@/shared/schemas/work-import';
 
 import { type Fixture, insertWork, studioFixture } from '../helpers/studio-fixture';
+import { addTestTrigger } from '../helpers/test-triggers';
 
 const as = async (f: Fixture, who: Parameters<Fixture['cookie']>[0] = 'owner') => ({
   Cookie: await f.cookie(who),
@@ -448,12 +449,13 @@ describe('POST /api/works/import', () => {
   it('writes nothing at all when an insert fails part way', async () => {
     const f = await withExisting();
     // A trigger makes the second insert fail, as a full disk or a constraint would.
-    await f.db.executeQuery(
-      (await import('kysely'))
-        .sql`create trigger refuse_second before insert on works when new.title = 'Second' begin select raise(abort, 'refused'); end`.compile(
-        f.db,
-      ),
-    );
+    await addTestTrigger(f.db, {
+      name: 'refuse_second',
+      table: 'works',
+      event: 'insert',
+      when: "new.title = 'Second'",
+      then: { refuse: 'refused' },
+    });
     const res = await request(f.app)
       .post('/api/works/import')
       .set(await as(f))
