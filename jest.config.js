@@ -58,9 +58,13 @@ module.exports = {
       globalSetup: '<rootDir>/tests/server/helpers/postgres-setup.ts',
       globalTeardown: '<rootDir>/tests/server/helpers/postgres-teardown.ts',
       // What only PostgreSQL offers (several server processes writing at once) is tested in
-      // that run alone, in files named *.postgres.test.ts.
-      testPathIgnorePatterns:
-        process.env.SAGGAR_TEST_DB === 'postgres' ? [] : ['\\.postgres\\.test\\.ts$'],
+      // that run alone, in files named *.postgres.test.ts; what only concerns the SQLite file
+      // (its online backup) in the SQLite run alone, in files named *.sqlite.test.ts.
+      testPathIgnorePatterns: [
+        process.env.SAGGAR_TEST_DB === 'postgres'
+          ? '\\.sqlite\\.test\\.ts$'
+          : '\\.postgres\\.test\\.ts$',
+      ],
       transform: {
         '^.+\\.(t|j|mj|cj)sx?$': [
           '@swc/jest',

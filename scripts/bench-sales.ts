@@ -43,27 +43,14 @@ async function main() {
           assistant: await signIn(seed.assistant),
         };
       };
-      const warm = await runSales(
-        server.url,
-        warmUp,
-        await sessions(warmUp),
-        today,
-        WARM_UP_SECONDS,
-        server.pid,
-      );
+      const warm = await runSales([server], warmUp, await sessions(warmUp), today, WARM_UP_SECONDS);
       console.log(
         `Warmed up: ${warm.latencies.length} sales in another studio in ${WARM_UP_SECONDS} s.`,
       );
-      const run = await runSales(
-        server.url,
-        bench,
-        await sessions(bench),
-        today,
-        SECONDS,
-        server.pid,
-      );
+      const run = await runSales([server], bench, await sessions(bench), today, SECONDS);
       await server.stop();
-      const met = reportSales(run, dbFile, bench);
+      const counting = openDatabase(dbFile);
+      const { met } = await reportSales(run, counting, bench).finally(() => counting.destroy());
       console.log(met ? '\nAll targets met.' : '\nSome targets missed.');
       if (!met) process.exitCode = 1;
     } finally {

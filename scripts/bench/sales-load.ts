@@ -1,8 +1,7 @@
 import fs from 'node:fs';
 import http from 'node:http';
 
-import SQLite from 'better-sqlite3';
-
+import { type Db } from '../../server/db/database';
 import { type SalesSeed } from './seed-sales';
 import { ms, stats } from './stats';
 
@@ -50,55 +49,61 @@ export function cpuMs(pid: number): number {
 }
 
 /** What the database holds after the run: the sold lines, and the audit entries of sales. */
-function countInDatabase(dbFile: string, studioId: number) {
-  const sqlite = new SQLite(dbFile, { readonly: true });
-  try {
-    const sold = sqlite
-      .prepare(`select id from consignment_lines where studio_id = ? and state = 'sold'`)
-      .pluck()
-      .all(studioId) as number[];
-    const audited = sqlite
-      .prepare(`select count(*) from audit_log where studio_id = ? and action = 'line.sold'`)
-      .pluck()
-      .get(studioId) as number;
-    const twice = sqlite
-      .prepare(
-        `select count(*) from (select entity_id from audit_log
-           where studio_id = ? and action = 'line.sold' group by entity_id having count(*) > 1)`,
-      )
-      .pluck()
-      .get(studioId) as number;
-    const mails = sqlite
-      .prepare(
-        `select outbox.id, count(consignment_lines.id) as sales, length(outbox.html_body) as html
-           from outbox left join consignment_lines on consignment_lines.sale_mail_id = outbox.id
-           where outbox.studio_id = ? and outbox.kind = 'sale' group by outbox.id`,
-      )
-      .all(studioId) as { id: number; sales: number; html: number }[];
-    return { sold, audited, twice, mails };
-  } finally {
-    sqlite.close();
-  }
+async function countInDatabase(db: Db, studioId: number) {
+  const sold = await db
+    .selectFrom('consignment_lines')
+    .select('id')
+    .where('studio_id', '=', studioId)
+    .where('state', '=', 'sold')
+    .execute();
+  const audits = db
+    .selectFrom('audit_log')
+    .where('studio_id', '=', studioId)
+    .where('action', '=', 'line.sold');
+  const audited = await audits
+    .select((eb) => eb.fn.countAll<number>().as('n'))
+    .executeTakeFirstOrThrow();
+  const twice = await audits
+    .select('entity_id')
+    .groupBy('entity_id')
+    .having((eb) => eb.fn.countAll(), '>', 1)
+    .execute();
+  const mails = await db
+    .selectFrom('outbox')
+    .leftJoin('consignment_lines', 'consignment_lines.sale_mail_id', 'outbox.id')
+    .select((eb) => [
+      'outbox.id',
+      eb.fn.count<number>('consignment_lines.id').as('sales'),
+      eb.fn<number>('length', ['outbox.html_body']).as('html'),
+    ])
+    .where('outbox.studio_id', '=', studioId)
+    .where('outbox.kind', '=', 'sale')
+    .groupBy(['outbox.id', 'outbox.html_body'])
+    .execute();
+  return { sold: sold.map((row) => row.id), audited: audited.n, twice: twice.length, mails };
 }
 
 export type Sessions = { staff: string[]; owner: string; assistant: string };
 
+/** A server process the clients send sales to. */
+export type SalesServer = { url: string; pid: number };
+
 /**
  * `CLIENTS` clients record sales for `seconds`, each back to back on the pieces of its own
  * consignment: at each venue eight clients are its staff and two the studio, taking sales by
- * phone (one session for each person).
+ * phone (one session for each person). With several servers, the clients take turns between
+ * them, as a load balancer would spread them.
  */
 export async function runSales(
-  serverUrl: string,
+  servers: readonly SalesServer[],
   seed: SalesSeed,
   sessions: Sessions,
   today: string,
   seconds: number,
-  serverPid: number,
 ) {
-  const url = new URL(serverUrl);
   const agent = new http.Agent({ keepAlive: true, maxSockets: CLIENTS });
-  const clients = seed.consignments.slice(0, CLIENTS).map(({ venue, position, lines }) => ({
+  const clients = seed.consignments.slice(0, CLIENTS).map(({ venue, position, lines }, n) => ({
+    url: new URL(servers[n % servers.length]!.url),
     lines,
     cookie:
       position < 8 ? sessions.staff[venue]! : position % 2 ? sessions.assistant : sessions.owner,
@@ -113,7 +118,8 @@ export async function runSales(
     elapsed: 0,
     serverCpuMs: 0,
   };
-  const cpuBefore = cpuMs(serverPid);
+  const serversCpuMs = () => servers.reduce((sum, server) => sum + cpuMs(server.pid), 0);
+  const cpuBefore = serversCpuMs();
   const started = performance.now();
   const deadline = started + seconds * 1000;
   await Promise.all(
@@ -129,7 +135,7 @@ export async function runSales(
         });
         const t = performance.now();
         const path = `/api/consignment-lines/${line.id}/sale`;
-        const answer = await post(agent, url, path, client.cookie, body);
+        const answer = await post(agent, client.url, path, client.cookie, body);
         const done = performance.now();
         run.latencies.push(done - t);
         const second = Math.floor((done - started) / 1000);
@@ -144,22 +150,22 @@ export async function runSales(
     }),
   );
   run.elapsed = (performance.now() - started) / 1000;
-  run.serverCpuMs = cpuMs(serverPid) - cpuBefore;
+  run.serverCpuMs = serversCpuMs() - cpuBefore;
   agent.destroy();
   return run;
 }
 export type SalesRun = Awaited<ReturnType<typeof runSales>>;
 
 /**
- * The figures of a run, and the database (once the server has stopped) counted against its
+ * The figures of a run, and the database (once the servers have stopped) counted against its
  * answers: a 201 for every sale the studio's lines hold and the other way round, each line sold
  * and audited once. Targets: at least 500 sales a second, p95 under 100 ms, none lost or
- * doubled. Answers whether all were met.
+ * doubled. Answers the figures and whether each target was met.
  */
-export function reportSales(run: SalesRun, dbFile: string, seed: SalesSeed): boolean {
+export async function reportSales(run: SalesRun, database: Db, seed: SalesSeed) {
   const s = stats(run.latencies);
   const rps = run.latencies.length / run.elapsed;
-  const db = countInDatabase(dbFile, seed.studioId);
+  const db = await countInDatabase(database, seed.studioId);
   const soldInDb = new Set(db.sold);
   const answered = new Set(run.sold);
   const lost = run.sold.filter((id) => !soldInDb.has(id)).length;
@@ -211,5 +217,5 @@ export function reportSales(run: SalesRun, dbFile: string, seed: SalesSeed): boo
       `${met ? 'met' : 'missed'} (throughput ${rps >= RPS_TARGET ? 'met' : 'missed'}, ` +
       `p95 ${s.p95 < P95_TARGET_MS ? 'met' : 'missed'}, counts ${counted ? 'agree' : 'DISAGREE'})`,
   );
-  return met;
+  return { met, rps, p95: s.p95, counted, sold: run.sold.length, serverCpuMs: run.serverCpuMs };
 }

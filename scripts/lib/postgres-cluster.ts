@@ -47,9 +47,10 @@ async function freePort(): Promise<number> {
  * trust authentication, for tests and benchmarks; `stop` shuts it down and deletes the folder.
  * The server refuses to run as root, so as root it runs as the `postgres` user Debian's package
  * makes. The C locale makes text sort and fold case as SQLite does (see server/db/dialect.ts);
- * fsync is off, since nothing here outlives the run.
+ * fsync is off, since nothing here outlives the run, unless `durable` (for a benchmark that
+ * compares it with SQLite, which does sync its commits).
  */
-export async function startPostgresCluster(): Promise<PostgresCluster> {
+export async function startPostgresCluster({ durable = false } = {}): Promise<PostgresCluster> {
   const bin = postgresBin();
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'saggar-pg-'));
   const asRoot = process.getuid?.() === 0;
@@ -69,9 +70,7 @@ export async function startPostgresCluster(): Promise<PostgresCluster> {
     `-k ${dir}`,
     '-c listen_addresses=127.0.0.1',
     '-c max_connections=300',
-    '-c fsync=off',
-    '-c synchronous_commit=off',
-    '-c full_page_writes=off',
+    ...(durable ? [] : ['-c fsync=off', '-c synchronous_commit=off', '-c full_page_writes=off']),
   ].join(' ');
   run('pg_ctl', ['-D', data, '-o', options, '-l', path.join(dir, 'server.log'), '-w', 'start']);
   return {
