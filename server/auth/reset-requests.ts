@@ -16,9 +16,14 @@ export async function countResetRequest(db: Db, email: string, address: string, 
   const fromAddress = await countAttempt(db, `reset-address:${address}`, now, windowMs);
   const overAccount = account.hits > perAccount;
   const overAddress = fromAddress.hits > perAddress;
-  const until = Math.max(
-    overAccount ? Date.parse(account.window_ends_at) : 0,
-    overAddress ? Date.parse(fromAddress.window_ends_at) : 0,
+  // A window opened by a racing request that read the clock a moment later may end a moment
+  // past a full window from now; nobody is told to wait longer than the window itself.
+  const until = Math.min(
+    now.getTime() + windowMs,
+    Math.max(
+      overAccount ? Date.parse(account.window_ends_at) : 0,
+      overAddress ? Date.parse(fromAddress.window_ends_at) : 0,
+    ),
   );
   const wait = until - now.getTime();
   return {

@@ -62,6 +62,16 @@ export function lockedForUpdate(db: AnyDb) {
 }
 
 /**
+ * For `query.$call(lockedForShare(trx))`: on PostgreSQL the rows read cannot be changed by
+ * another transaction until this one ends, while any number of others may hold the same lock
+ * (several sales joining one held e-mail at once, which the mail worker's claim then waits for).
+ */
+export function lockedForShare(db: AnyDb) {
+  const postgres = isPostgres(db);
+  return <Q extends { forShare: () => Q }>(query: Q): Q => (postgres ? query.forShare() : query);
+}
+
+/**
  * Refuses a PostgreSQL database whose text rules are not the C locale's: under another, ORDER BY
  * would sort stock numbers and names differently from SQLite, and lower() and ILIKE would fold
  * more than ASCII.

@@ -5,7 +5,7 @@ import { type OutboxState, type OutgoingMail, outgoingMailSchema } from '@/share
 import { scoped } from '../access/scoped';
 import { type Scope } from '../access/viewer';
 import { type Db } from '../db/database';
-import { lockedForUpdate } from '../db/dialect';
+import { lockedForShare } from '../db/dialect';
 import { type OutboxRow } from '../db/schema/outbox';
 import { type OutboxMessageColumns, type OutboxSummaryColumns } from './outbox.mapper';
 import { nudgeOutbox } from './outbox-nudge';
@@ -46,8 +46,9 @@ export async function enqueueMail(
 
 /**
  * A message of `kind` to `to` still held back (queued, never tried, unclaimed and not yet due):
- * one that news of the same kind can still be added to before it goes. Locked until the
- * transaction ends (on PostgreSQL), so a worker cannot claim and word it while news joins it.
+ * one that news of the same kind can still be added to before it goes. Share-locked until the
+ * transaction ends (on PostgreSQL), so a worker cannot claim and word it while news joins it,
+ * though other news may join it at the same time.
  */
 export async function findHeldMail(
   db: Db,
@@ -67,7 +68,7 @@ export async function findHeldMail(
     .where('claim_token', 'is', null)
     .where('next_attempt_at', '>', now.toISOString())
     .orderBy('id')
-    .$call(lockedForUpdate(db))
+    .$call(lockedForShare(db))
     .executeTakeFirst();
 }
 

@@ -94,8 +94,13 @@ export async function noteSalesForMaker(
 ): Promise<void> {
   const to = await findOwnerAddress(trx, scope);
   if (!to) return;
-  await lockStudio(trx, scope);
-  const held = await findHeldMail(trx, scope.studioId, 'sale', to, now);
+  // Joining a message already held only shares its lock with other sales joining it; starting
+  // one takes the studio's lock and looks again, so racing sales start one message, not several.
+  let held = await findHeldMail(trx, scope.studioId, 'sale', to, now);
+  if (!held) {
+    await lockStudio(trx, scope);
+    held = await findHeldMail(trx, scope.studioId, 'sale', to, now);
+  }
   if (held) {
     await setSaleMail(trx, scope, lineIds, held.id);
     return;
