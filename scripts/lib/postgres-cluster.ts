@@ -1,8 +1,9 @@
 import { execFileSync } from 'node:child_process';
 import fs from 'node:fs';
-import net from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
+
+import { freePort } from './free-port';
 
 export type PostgresCluster = {
   /** The cluster's `postgres` database, as its superuser `postgres`, over loopback. */
@@ -29,17 +30,6 @@ function postgresBin(): string {
     );
   }
   return path.join(root, versions[0]!, 'bin');
-}
-
-async function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probe = net.createServer();
-    probe.once('error', reject);
-    probe.listen(0, '127.0.0.1', () => {
-      const { port } = probe.address() as net.AddressInfo;
-      probe.close(() => resolve(port));
-    });
-  });
 }
 
 /**

@@ -1,21 +1,10 @@
 import { type ChildProcess, spawn } from 'node:child_process';
-import net from 'node:net';
 import path from 'node:path';
 
 import { isPostgresUrl } from '../../server/db/database';
+import { freePort } from './free-port';
 
 const root = path.resolve(__dirname, '../..');
-
-async function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probe = net.createServer();
-    probe.once('error', reject);
-    probe.listen(0, '127.0.0.1', () => {
-      const { port } = probe.address() as net.AddressInfo;
-      probe.close(() => resolve(port));
-    });
-  });
-}
 
 export type ServerProcess = {
   url: string;
