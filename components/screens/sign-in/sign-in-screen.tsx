@@ -4,7 +4,7 @@ import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { bindForm } from '@/components/ui/form/binding';
 import { textCodec } from '@/components/ui/form/codecs';
-import { FormText } from '@/components/ui/form/fields';
+import { emailInput, FormText } from '@/components/ui/form/fields';
 import { useSchemaForm } from '@/components/ui/form/use-schema-form';
 import { Notice } from '@/components/ui/notice';
 import { Screen } from '@/components/ui/screen';
@@ -48,12 +48,7 @@ export function SignInScreen({ notice = null }: { notice?: string | null }) {
           name="email"
           testID="sign-in-email"
           label="E-mail address"
-          autoCapitalize="none"
-          autoComplete="email"
-          autoCorrect={false}
-          inputMode="email"
-          keyboardType="email-address"
-          textContentType="emailAddress"
+          {...emailInput}
           returnKeyType="next"
         />
         <FormText

@@ -54,6 +54,16 @@ export function FormText<Values extends FieldValues, Body>({
   return <TextField {...input} {...bound} />;
 }
 
+/** What an e-mail address field tells the keyboard, autofill and autocorrect. */
+export const emailInput = {
+  autoCapitalize: 'none',
+  autoComplete: 'email',
+  autoCorrect: false,
+  inputMode: 'email',
+  keyboardType: 'email-address',
+  textContentType: 'emailAddress',
+} as const;
+
 /** An amount in major units, with the currency's symbol. */
 export function FormMoney<Values extends FieldValues, Body>({
   currency,
