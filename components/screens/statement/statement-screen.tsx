@@ -6,11 +6,9 @@ import { Card } from '@/components/ui/card';
 import { DownloadLink } from '@/components/ui/download-link';
 import { Notice } from '@/components/ui/notice';
 import { Screen } from '@/components/ui/screen';
-import { StateMark } from '@/components/ui/state-mark';
 import { ErrorView, LoadingView } from '@/components/ui/status-views';
 import { Heading, Text } from '@/components/ui/text';
 import { TextLink } from '@/components/ui/text-link';
-import { statementStateLooks } from '@/constants/states';
 import { spacing } from '@/constants/theme';
 import { errorMessage } from '@/hooks/api-errors';
 import {
@@ -25,6 +23,7 @@ import { AdjustmentForm } from './adjustment-form';
 import { PaymentForm } from './payment-form';
 import { StatementBalance } from './statement-balance';
 import { statementDates, StatementLines, StatementVat } from './statement-figures';
+import { StatementHeading } from './statement-heading';
 
 /** A draft's one action, confirmed first: issuing cannot be taken back. */
 function IssueStep({ statement }: { statement: Statement }) {
@@ -148,30 +147,15 @@ export function StatementScreen({ id }: { id: number }) {
   const s = query.data;
   return (
     <Screen testID="statement-screen">
-      <View style={styles.heading}>
-        <TextLink href="/statements" label="All statements" />
-        {s ? (
-          <>
-            <Text variant="small" style={styles.tabular}>
-              {s.reference}
-            </Text>
-            <Heading level={1} testID="statement-title">
-              {s.consignment
-                ? `Statement for ${s.consignment.title}`
-                : `Statement for ${s.venue.name}`}
-            </Heading>
-            <Text>{s.venue.name}</Text>
-            {s.consignment ? (
-              <TextLink
-                href={{ pathname: '/consignments/[id]', params: { id: String(s.consignment.id) } }}
-                label={`Consignment ${s.consignment.reference}`}
-                testID="statement-consignment"
-              />
-            ) : null}
-            <StateMark look={statementStateLooks[s.state]} testID="statement-state" />
-          </>
+      <StatementHeading statement={s} backHref="/statements">
+        {s?.consignment ? (
+          <TextLink
+            href={{ pathname: '/consignments/[id]', params: { id: String(s.consignment.id) } }}
+            label={`Consignment ${s.consignment.reference}`}
+            testID="statement-consignment"
+          />
         ) : null}
-      </View>
+      </StatementHeading>
       {query.isPending ? (
         <LoadingView message="Fetching the statement…" />
       ) : query.isError ? (
@@ -184,8 +168,6 @@ export function StatementScreen({ id }: { id: number }) {
 }
 
 const styles = StyleSheet.create({
-  heading: { gap: spacing.xs, alignItems: 'flex-start' },
-  tabular: { fontVariant: ['tabular-nums'] },
   section: { gap: spacing.md },
   buttons: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
   start: { alignSelf: 'flex-start' },

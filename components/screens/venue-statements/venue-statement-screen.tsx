@@ -6,11 +6,8 @@ import { DownloadLink } from '@/components/ui/download-link';
 import { goToAddress } from '@/components/ui/go-to-address';
 import { Notice } from '@/components/ui/notice';
 import { Screen } from '@/components/ui/screen';
-import { StateMark } from '@/components/ui/state-mark';
 import { ErrorView, LoadingView } from '@/components/ui/status-views';
 import { Heading, Text } from '@/components/ui/text';
-import { TextLink } from '@/components/ui/text-link';
-import { statementStateLooks } from '@/constants/states';
 import { spacing } from '@/constants/theme';
 import { errorMessage } from '@/hooks/api-errors';
 import {
@@ -23,6 +20,7 @@ import { type Statement } from '@/shared/schemas/statement';
 
 import { StatementBalance } from '../statement/statement-balance';
 import { statementDates, StatementLines } from '../statement/statement-figures';
+import { StatementHeading } from '../statement/statement-heading';
 
 /** How the person came back from the payment page, if they did. */
 export type PaymentReturn = 'done' | 'cancelled' | null;
@@ -78,23 +76,7 @@ export function VenueStatementScreen({ id, payment }: { id: number; payment: Pay
   const s = query.data;
   return (
     <Screen testID="venue-statement-screen">
-      <View style={styles.heading}>
-        <TextLink href="/venue/statements" label="All statements" />
-        {s ? (
-          <>
-            <Text variant="small" style={styles.tabular}>
-              {s.reference}
-            </Text>
-            <Heading level={1} testID="statement-title">
-              {s.consignment
-                ? `Statement for ${s.consignment.title}`
-                : `Statement for ${s.venue.name}`}
-            </Heading>
-            <Text>{s.venue.name}</Text>
-            <StateMark look={statementStateLooks[s.state]} testID="statement-state" />
-          </>
-        ) : null}
-      </View>
+      <StatementHeading statement={s} backHref="/venue/statements" />
       {query.isPending ? (
         <LoadingView message="Fetching the statement…" />
       ) : query.isError ? (
@@ -129,8 +111,6 @@ export function VenueStatementScreen({ id, payment }: { id: number; payment: Pay
 }
 
 const styles = StyleSheet.create({
-  heading: { gap: spacing.xs, alignItems: 'flex-start' },
-  tabular: { fontVariant: ['tabular-nums'] },
   section: { gap: spacing.md },
   pay: { gap: spacing.sm },
   documents: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.md },
