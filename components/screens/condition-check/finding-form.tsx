@@ -7,12 +7,9 @@ import { bindForm } from '@/components/ui/form/binding';
 import { choiceCodec, numberCodec, textCodec } from '@/components/ui/form/codecs';
 import { FormChoice, FormNumber, FormSelect, FormText } from '@/components/ui/form/fields';
 import { useSchemaForm } from '@/components/ui/form/use-schema-form';
-import { Notice } from '@/components/ui/notice';
-import { pickPhotos } from '@/components/ui/photo-picker';
-import { SquareImage } from '@/components/ui/square-image';
+import { type AttachedPhoto, OnePhotoField } from '@/components/ui/one-photo-field';
 import { Text } from '@/components/ui/text';
 import { palette, radii, spacing } from '@/constants/theme';
-import { errorMessage } from '@/hooks/api-errors';
 import { useConditionPhotoMutation } from '@/hooks/queries/consignments';
 import { findingKindWords } from '@/shared/condition/words';
 import {
@@ -77,20 +74,9 @@ export function FindingForm({
   onCancel: () => void;
 }) {
   const upload = useConditionPhotoMutation();
-  const [photo, setPhoto] = useState<{ fileId: number; url: string } | null>(null);
-  const [problem, setProblem] = useState<string | null>(null);
+  const [photo, setPhoto] = useState<AttachedPhoto | null>(null);
   const { control, submit } = useSchemaForm(findingBinding, emptyFinding);
   const field = { control } as const;
-
-  const addPhoto = async () => {
-    setProblem(null);
-    try {
-      const [file] = await pickPhotos();
-      if (file) setPhoto(await upload.mutateAsync(file));
-    } catch (error) {
-      setProblem(errorMessage(error));
-    }
-  };
 
   return (
     <View style={styles.form} role="group" aria-label="A finding">
@@ -129,20 +115,14 @@ export function FindingForm({
         label="Notes (optional)"
         multiline
       />
-      <View style={styles.photo}>
-        {photo ? (
-          <SquareImage uri={`${photo.url}/thumbnail`} size={72} label="Photo of the finding" />
-        ) : null}
-        <Button
-          testID={`${testID}-photo`}
-          label={photo ? 'Change the photo' : 'Add a photo'}
-          busyLabel="Sending the photo…"
-          busy={upload.isPending}
-          variant="secondary"
-          onPress={() => void addPhoto()}
-        />
-      </View>
-      {problem ? <Notice message={problem} /> : null}
+      <OnePhotoField
+        upload={upload}
+        photo={photo}
+        onChange={setPhoto}
+        addLabel="Add a photo"
+        imageLabel="Photo of the finding"
+        testID={`${testID}-photo`}
+      />
       <View style={styles.buttons}>
         <Button
           testID={`${testID}-add`}
@@ -176,7 +156,6 @@ const styles = StyleSheet.create({
     borderColor: palette.hairline,
     backgroundColor: palette.paper,
   },
-  photo: { flexDirection: 'row', alignItems: 'center', gap: spacing.md, flexWrap: 'wrap' },
   buttons: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
 });
 

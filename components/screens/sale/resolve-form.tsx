@@ -8,12 +8,9 @@ import { dateCodec, textCodec } from '@/components/ui/form/codecs';
 import { FormDate, FormText } from '@/components/ui/form/fields';
 import { useSchemaForm } from '@/components/ui/form/use-schema-form';
 import { FormFooter } from '@/components/ui/form-footer';
-import { Notice } from '@/components/ui/notice';
-import { pickPhotos } from '@/components/ui/photo-picker';
-import { SquareImage } from '@/components/ui/square-image';
+import { type AttachedPhoto, OnePhotoField } from '@/components/ui/one-photo-field';
 import { Heading, Text } from '@/components/ui/text';
 import { spacing } from '@/constants/theme';
-import { errorMessage } from '@/hooks/api-errors';
 import { useLinePhotoMutation } from '@/hooks/queries/sales';
 import { type LineResolve, lineResolveSchema, type ResolveState } from '@/shared/schemas/sale';
 
@@ -89,23 +86,12 @@ export function ResolveForm({
   onCancel: () => void;
 }) {
   const upload = useLinePhotoMutation(lineId);
-  const [photo, setPhoto] = useState<{ fileId: number; url: string } | null>(null);
-  const [problem, setProblem] = useState<string | null>(null);
+  const [photo, setPhoto] = useState<AttachedPhoto | null>(null);
   const { control, formState, submit } = useSchemaForm(bindingFor(state, window), {
     on: window.today,
     note: '',
   });
   const w = words[state];
-
-  const addPhoto = async () => {
-    setProblem(null);
-    try {
-      const [file] = await pickPhotos();
-      if (file) setPhoto(await upload.mutateAsync(file));
-    } catch (error) {
-      setProblem(errorMessage(error));
-    }
-  };
 
   return (
     <View style={styles.form} role="form" aria-label={w.heading}>
@@ -120,21 +106,15 @@ export function ResolveForm({
         multiline
       />
       {state === 'damaged' ? (
-        <View style={styles.photo}>
-          {photo ? (
-            <SquareImage uri={`${photo.url}/thumbnail`} size={72} label="Photo of the damage" />
-          ) : null}
-          <Button
-            testID={`${testID}-photo`}
-            label={photo ? 'Change the photo' : 'Add a photo of the damage'}
-            busyLabel="Sending the photo…"
-            busy={upload.isPending}
-            variant="secondary"
-            onPress={() => void addPhoto()}
-          />
-        </View>
+        <OnePhotoField
+          upload={upload}
+          photo={photo}
+          onChange={setPhoto}
+          addLabel="Add a photo of the damage"
+          imageLabel="Photo of the damage"
+          testID={`${testID}-photo`}
+        />
       ) : null}
-      {problem ? <Notice message={problem} /> : null}
       {state === 'damaged' || state === 'lost' ? (
         <Text variant="small">The consignment’s terms say who insures the piece at the venue.</Text>
       ) : null}
@@ -156,5 +136,4 @@ export function ResolveForm({
 
 const styles = StyleSheet.create({
   form: { gap: spacing.md },
-  photo: { flexDirection: 'row', alignItems: 'center', gap: spacing.md, flexWrap: 'wrap' },
 });
